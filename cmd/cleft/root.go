@@ -1,0 +1,93 @@
+package main
+
+import (
+	"errors"
+	"fmt"
+	"io"
+	"strings"
+
+	"github.com/spf13/cobra"
+)
+
+// version is the tool version shown by --version and in every output.
+var version = "0.1.0"
+
+// caution is printed by --help and by every command that reports results.
+const caution = `Caution: cleft gives screening-level results from the stated inputs. Stress
+and water estimates carry large uncertainty. It is not a substitute for site
+investigation, engineering judgement, local codes and licensed practice.`
+
+// usageError marks a mistake on the command line (exit status 2).
+type usageError struct{ error }
+
+func usagef(format string, a ...any) error { return usageError{fmt.Errorf(format, a...)} }
+
+// run executes the command line and returns the exit status: 0, 1 for a
+// runtime error (bad input file, failed write), 2 for a bad command line.
+func run(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
+	started := false
+	root := newRootCmd(stdin, stdout, stderr, &started)
+	root.SetArgs(args)
+	err := root.Execute()
+	if err == nil {
+		return 0
+	}
+	var ue usageError
+	if errors.As(err, &ue) || !started {
+		fmt.Fprintf(stderr, "cleft: %v\n", err)
+		name := "cleft"
+		if c, _, ferr := root.Find(args); ferr == nil && c != root {
+			name = c.CommandPath()
+		}
+		fmt.Fprintf(stderr, "Run '%s --help' for usage.\n", name)
+		return 2
+	}
+	fmt.Fprintf(stderr, "cleft: %v\n", err)
+	return 1
+}
+
+func newRootCmd(stdin io.Reader, stdout, stderr io.Writer, started *bool) *cobra.Command {
+	root := &cobra.Command{
+		Use:   "cleft",
+		Short: "Effective-stress screening of joints and faults in rock",
+		Long: `cleft takes one site file — the in-situ stress model, the groundwater level,
+the strength of the discontinuities and the mapped planes (dip / dip direction)
+— and works out, for every plane, the normal and shear stress, slip and
+dilation tendency, factor of safety, the rise in water pressure that would make
+it slip, and the sense of slip.
+
+Conventions: x north, y east, z down; compression positive; MPa; depths in m
+below ground; angles in degrees, azimuths clockwise from north.
+
+` + caution,
+		Version:       version,
+		SilenceErrors: true,
+		SilenceUsage:  true,
+		PersistentPreRun: func(*cobra.Command, []string) {
+			*started = true
+		},
+	}
+	root.SetIn(stdin)
+	root.SetOut(stdout)
+	root.SetErr(stderr)
+	root.SetFlagErrorFunc(func(_ *cobra.Command, err error) error { return usageError{err} })
+	root.AddCommand(
+		newResolveCmd(),
+		newStressCmd(),
+		newAssessCmd(),
+		newExampleCmd(),
+	)
+	root.CompletionOptions.DisableDefaultCmd = true
+	return root
+}
+
+// oneSite is the argument check of the commands that take one site file.
+func oneSite(_ *cobra.Command, args []string) error {
+	switch len(args) {
+	case 1:
+		return nil
+	case 0:
+		return usagef("missing the site file: give SITE.yaml")
+	}
+	return usagef("want one site file, got %d arguments: %s", len(args), strings.Join(args, " "))
+}

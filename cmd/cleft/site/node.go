@@ -1,0 +1,269 @@
+package site
+
+import (
+	"fmt"
+	"math"
+	"sort"
+	"strconv"
+	"strings"
+
+	"go.yaml.in/yaml/v3"
+)
+
+// node is a YAML node with its key path, so that every error can name the
+// file, the line and the key. Decoding is strict: a mapping may hold only
+// the keys its reader asks for.
+type node struct {
+	file string
+	path string
+	n    *yaml.Node
+}
+
+func (d node) errf(format string, a ...any) *Error {
+	line := 0
+	if d.n != nil {
+		line = d.n.Line
+	}
+	return &Error{File: d.file, Line: line, Key: d.path, Msg: fmt.Sprintf(format, a...)}
+}
+
+func (d node) child(key string, n *yaml.Node) node {
+	p := key
+	if d.path != "" {
+		p = d.path + "." + key
+	}
+	return node{file: d.file, path: p, n: resolveAlias(n)}
+}
+
+func resolveAlias(n *yaml.Node) *yaml.Node {
+	for n != nil && n.Kind == yaml.AliasNode {
+		n = n.Alias
+	}
+	return n
+}
+
+// fields is a mapping whose keys have been checked against a list.
+type fields struct {
+	parent node
+	vals   map[string]node
+	keys   map[string]*yaml.Node // key nodes, for "missing/conflicting" lines
+}
+
+// mapping checks that d is a mapping with keys only from allowed.
+func (d node) mapping(allowed ...string) (*fields, error) {
+	if d.n == nil || d.n.Kind != yaml.MappingNode {
+		return nil, d.errf("want a mapping of keys (%s), got %s", strings.Join(allowed, ", "), kindName(d.n))
+	}
+	f := &fields{parent: d, vals: map[string]node{}, keys: map[string]*yaml.Node{}}
+	for i := 0; i+1 < len(d.n.Content); i += 2 {
+		k, v := d.n.Content[i], d.n.Content[i+1]
+		name := k.Value
+		ok := false
+		for _, a := range allowed {
+			if a == name {
+				ok = true
+				break
+			}
+		}
+		if !ok {
+			msg := fmt.Sprintf("unknown key %q; allowed here: %s", name, strings.Join(allowed, ", "))
+			if s := suggest(name, allowed); s != "" {
+				msg = fmt.Sprintf("unknown key %q (did you mean %q?); allowed here: %s", name, s, strings.Join(allowed, ", "))
+			}
+			kd := d.child(name, k)
+			return nil, kd.errf("%s", msg)
+		}
+		f.vals[name] = d.child(name, v)
+		f.keys[name] = k
+	}
+	return f, nil
+}
+
+func kindName(n *yaml.Node) string {
+	if n == nil {
+		return "nothing"
+	}
+	switch n.Kind {
+	case yaml.MappingNode:
+		return "a mapping"
+	case yaml.SequenceNode:
+		return "a list"
+	case yaml.ScalarNode:
+		if n.Tag == "!!null" {
+			return "an empty value"
+		}
+		return fmt.Sprintf("%q", n.Value)
+	}
+	return "something else"
+}
+
+// suggest returns the allowed key closest to name by edit distance, if close.
+func suggest(name string, allowed []string) string {
+	best, bd := "", 3
+	for _, a := range allowed {
+		if d := editDistance(strings.ToLower(name), a); d < bd {
+			best, bd = a, d
+		}
+	}
+	return best
+}
+
+func editDistance(a, b string) int {
+	prev := make([]int, len(b)+1)
+	cur := make([]int, len(b)+1)
+	for j := range prev {
+		prev[j] = j
+	}
+	for i := 1; i <= len(a); i++ {
+		cur[0] = i
+		for j := 1; j <= len(b); j++ {
+			c := 1
+			if a[i-1] == b[j-1] {
+				c = 0
+			}
+			cur[j] = min(prev[j]+1, cur[j-1]+1, prev[j-1]+c)
+		}
+		prev, cur = cur, prev
+	}
+	return prev[len(b)]
+}
+
+func (f *fields) has(key string) bool { _, ok := f.vals[key]; return ok }
+
+func (f *fields) get(key string) (node, bool) { v, ok := f.vals[key]; return v, ok }
+
+// names lists the present keys among candidates, sorted.
+func (f *fields) present(candidates ...string) []string {
+	var out []string
+	for _, c := range candidates {
+		if f.has(c) {
+			out = append(out, c)
+		}
+	}
+	sort.Strings(out)
+	return out
+}
+
+func (f *fields) missing(key, why string) *Error {
+	return f.parent.errf("missing required key %q%s", key, why)
+}
+
+// number reads a finite number.
+func (d node) number() (float64, error) {
+	if d.n == nil || d.n.Kind != yaml.ScalarNode || d.n.Tag == "!!null" {
+		return 0, d.errf("want a number, got %s", kindName(d.n))
+	}
+	v, err := strconv.ParseFloat(strings.TrimSpace(d.n.Value), 64)
+	if err != nil || math.IsNaN(v) || math.IsInf(v, 0) {
+		return 0, d.errf("want a finite number, got %q", d.n.Value)
+	}
+	return v, nil
+}
+
+// interval is a range check: [lo, hi] or open ends by flags.
+type interval struct {
+	lo, hi         float64
+	openLo, openHi bool
+	unit           string
+}
+
+func (iv interval) String() string {
+	l, r := "[", "]"
+	if iv.openLo {
+		l = "("
+	}
+	if iv.openHi {
+		r = ")"
+	}
+	hi := strconv.FormatFloat(iv.hi, 'g', -1, 64)
+	if math.IsInf(iv.hi, 1) {
+		hi = "∞"
+	}
+	s := fmt.Sprintf("%s%s, %s%s", l, strconv.FormatFloat(iv.lo, 'g', -1, 64), hi, r)
+	if iv.unit != "" {
+		s += " " + iv.unit
+	}
+	return s
+}
+
+func (iv interval) contains(v float64) bool {
+	if v < iv.lo || v > iv.hi || (iv.openLo && v == iv.lo) || (iv.openHi && v == iv.hi) {
+		return false
+	}
+	return true
+}
+
+var (
+	positive    = interval{lo: 0, hi: math.Inf(1), openLo: true, openHi: true}
+	nonNegative = interval{lo: 0, hi: math.Inf(1), openHi: true}
+)
+
+func unit(iv interval, u string) interval { iv.unit = u; return iv }
+
+// numberIn reads a finite number within iv.
+func (d node) numberIn(iv interval) (float64, error) {
+	v, err := d.number()
+	if err != nil {
+		return 0, err
+	}
+	if !iv.contains(v) {
+		return 0, d.errf("%s is outside the allowed range %s", d.n.Value, iv)
+	}
+	return v, nil
+}
+
+func (d node) text() (string, error) {
+	if d.n == nil || d.n.Kind != yaml.ScalarNode || d.n.Tag == "!!null" {
+		return "", d.errf("want text, got %s", kindName(d.n))
+	}
+	return d.n.Value, nil
+}
+
+func (d node) boolean() (bool, error) {
+	if d.n == nil || d.n.Kind != yaml.ScalarNode || d.n.Tag != "!!bool" {
+		return false, d.errf("want true or false, got %s", kindName(d.n))
+	}
+	return d.n.Value == "true" || d.n.Value == "True" || d.n.Value == "TRUE", nil
+}
+
+func (d node) oneOf(choices ...string) (string, error) {
+	s, err := d.text()
+	if err != nil {
+		return "", err
+	}
+	for _, c := range choices {
+		if s == c {
+			return s, nil
+		}
+	}
+	return "", d.errf("%q is not one of: %s", s, strings.Join(choices, ", "))
+}
+
+func (d node) list() ([]node, error) {
+	if d.n == nil || d.n.Kind != yaml.SequenceNode {
+		return nil, d.errf("want a list, got %s", kindName(d.n))
+	}
+	out := make([]node, len(d.n.Content))
+	for i, c := range d.n.Content {
+		out[i] = node{file: d.file, path: fmt.Sprintf("%s[%d]", d.path, i), n: resolveAlias(c)}
+	}
+	return out, nil
+}
+
+// optNumber reads key if present, else returns def and false.
+func (f *fields) optNumber(key string, iv interval, def float64) (float64, bool, error) {
+	v, ok := f.get(key)
+	if !ok {
+		return def, false, nil
+	}
+	x, err := v.numberIn(iv)
+	return x, true, err
+}
+
+func (f *fields) optText(key string) (string, error) {
+	v, ok := f.get(key)
+	if !ok {
+		return "", nil
+	}
+	return v.text()
+}

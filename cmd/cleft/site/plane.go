@@ -1,0 +1,218 @@
+package site
+
+import (
+	"math"
+	"strconv"
+	"strings"
+
+	"cleft/planes"
+)
+
+// Plane is one input plane with its optional per-plane values. Friction,
+// Cohesion and PorePressure are NaN when the input leaves them out.
+type Plane struct {
+	Line         int // line in the file it came from (1-indexed)
+	Name         string
+	Orientation  planes.Orientation
+	Depth        float64 // m
+	Friction     float64 // μ, overrides the site's
+	Cohesion     float64 // MPa, overrides the site's
+	PorePressure float64 // MPa, overrides the water model
+	// Extras are the values of the input's extra columns, in ExtraNames order.
+	Extras []string
+}
+
+// The columns a plane may give, in both the CSV table and inline YAML.
+const (
+	colName = iota
+	colDip
+	colDipDirection
+	colStrike
+	colDepth
+	colFriction
+	colCohesion
+	colPorePressure
+	nCols
+)
+
+var colNames = [nCols]string{"name", "dip", "dip_direction", "strike", "depth", "friction", "cohesion", "pore_pressure"}
+
+// planeDefaults are what a plane falls back on.
+type planeDefaults struct {
+	depth    float64
+	hasDepth bool
+	coulomb  bool // the site criterion is Coulomb (cohesion alone may override it)
+}
+
+func (s *Site) planeDefaults() planeDefaults {
+	_, c := s.Criterion.(*planes.Coulomb)
+	return planeDefaults{depth: s.Depth, hasDepth: s.HasDepth, coulomb: c}
+}
+
+// parsePlane builds a plane from the raw text of its columns; present says
+// which columns the input has. errAt reports a problem with one column.
+func parsePlane(vals *[nCols]string, present *[nCols]bool, d planeDefaults, errAt func(col int, format string, a ...any) error) (Plane, error) {
+	var p Plane
+	p.Name = strings.TrimSpace(vals[colName])
+	if p.Name == "" {
+		return p, errAt(colName, "empty name: every plane needs one")
+	}
+	num := func(col int) (float64, bool, error) {
+		if !present[col] {
+			return math.NaN(), false, nil
+		}
+		t := strings.TrimSpace(vals[col])
+		if t == "" {
+			return math.NaN(), false, nil
+		}
+		v, err := strconv.ParseFloat(t, 64)
+		if err != nil || math.IsNaN(v) || math.IsInf(v, 0) {
+			return 0, false, errAt(col, "%q is not a number", t)
+		}
+		return v, true, nil
+	}
+	dip, ok, err := num(colDip)
+	if err != nil {
+		return p, err
+	}
+	if !ok {
+		return p, errAt(colDip, "empty: every plane needs a dip in [0, 90]°")
+	}
+	if dip < 0 || dip > 90 {
+		return p, errAt(colDip, "%s is outside [0, 90]° (dip is measured down from the horizontal)", fmtNum(dip))
+	}
+	if present[colStrike] {
+		st, ok, err := num(colStrike)
+		if err != nil {
+			return p, err
+		}
+		if !ok {
+			return p, errAt(colStrike, "empty: every plane needs a strike in [0, 360]°")
+		}
+		if p.Orientation, err = planes.FromStrike(st, dip); err != nil {
+			return p, errAt(colStrike, "%s is outside [0, 360]°", fmtNum(st))
+		}
+	} else {
+		dd, ok, err := num(colDipDirection)
+		if err != nil {
+			return p, err
+		}
+		if !ok {
+			return p, errAt(colDipDirection, "empty: every plane needs a dip direction in [0, 360]°")
+		}
+		if p.Orientation, err = planes.New(dip, dd); err != nil {
+			return p, errAt(colDipDirection, "%s is outside [0, 360]°", fmtNum(dd))
+		}
+	}
+	z, ok, err := num(colDepth)
+	if err != nil {
+		return p, err
+	}
+	switch {
+	case ok && z < 0:
+		return p, errAt(colDepth, "%s is negative: depth is metres below ground, ≥ 0", fmtNum(z))
+	case ok:
+		p.Depth = z
+	case d.hasDepth:
+		p.Depth = d.depth
+	default:
+		return p, errAt(colDepth, "no depth for this plane and no depth: in the site file")
+	}
+	if p.Friction, ok, err = num(colFriction); err != nil {
+		return p, err
+	} else if ok && !(p.Friction > 0) {
+		return p, errAt(colFriction, "%s: friction must be > 0", fmtNum(p.Friction))
+	}
+	if p.Cohesion, ok, err = num(colCohesion); err != nil {
+		return p, err
+	} else if ok && p.Cohesion < 0 {
+		return p, errAt(colCohesion, "%s MPa: cohesion must be ≥ 0", fmtNum(p.Cohesion))
+	} else if ok && !d.coulomb && math.IsNaN(p.Friction) {
+		return p, errAt(colCohesion, "a cohesion alone cannot override the Barton–Bandis criterion: give friction too")
+	}
+	if p.PorePressure, ok, err = num(colPorePressure); err != nil {
+		return p, err
+	} else if ok && p.PorePressure < 0 {
+		return p, errAt(colPorePressure, "%s MPa: pore pressure must be ≥ 0", fmtNum(p.PorePressure))
+	}
+	return p, nil
+}
+
+// CriterionFor returns the strength criterion of plane p: the site's, or a
+// Coulomb criterion built in scratch from the plane's friction and cohesion
+// columns (a missing one taken from the site's Coulomb criterion, or 0
+// cohesion). It does not allocate.
+func (s *Site) CriterionFor(p *Plane, scratch *planes.Coulomb) planes.Criterion {
+	hasMu, hasC := !math.IsNaN(p.Friction), !math.IsNaN(p.Cohesion)
+	if !hasMu && !hasC {
+		return s.Criterion
+	}
+	*scratch = planes.Coulomb{}
+	if base, ok := s.Criterion.(*planes.Coulomb); ok {
+		*scratch = *base
+	}
+	if hasMu {
+		scratch.Mu = p.Friction
+	}
+	if hasC {
+		scratch.Cohesion = p.Cohesion
+	}
+	return scratch
+}
+
+var inlineKeys = append(colNames[:], "set")
+
+func (s *Site) readInlinePlanes(v node) error {
+	items, err := v.list()
+	if err != nil {
+		return err
+	}
+	d := s.planeDefaults()
+	for _, it := range items {
+		m, err := it.mapping(inlineKeys...)
+		if err != nil {
+			return err
+		}
+		var vals [nCols]string
+		var present [nCols]bool
+		for i, k := range colNames {
+			kv, ok := m.get(k)
+			if !ok {
+				continue
+			}
+			t, err := kv.text()
+			if err != nil {
+				return err
+			}
+			vals[i], present[i] = t, true
+		}
+		for _, req := range []int{colName, colDip} {
+			if !present[req] {
+				return m.missing(colNames[req], " (each plane has name, dip and dip_direction or strike)")
+			}
+		}
+		if present[colStrike] == present[colDipDirection] {
+			return it.errf("give dip_direction or strike (right-hand rule), one of the two")
+		}
+		p, err := parsePlane(&vals, &present, d, func(col int, format string, a ...any) error {
+			return m.vals[colNames[col]].errf(format, a...)
+		})
+		if err != nil {
+			if _, ok := err.(*Error); ok {
+				return err
+			}
+			return it.errf("%v", err)
+		}
+		p.Line = it.n.Line
+		if sv, ok := m.get("set"); ok {
+			t, err := sv.text()
+			if err != nil {
+				return err
+			}
+			p.Extras = []string{t}
+			s.inlineSet = true
+		}
+		s.Planes = append(s.Planes, p)
+	}
+	return nil
+}

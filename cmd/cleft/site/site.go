@@ -1,0 +1,377 @@
+package site
+
+import (
+	"bytes"
+	"errors"
+	"fmt"
+	"io"
+	"io/fs"
+	"os"
+	"path/filepath"
+	"strings"
+
+	"cleft/insitu"
+	"cleft/planes"
+
+	"go.yaml.in/yaml/v3"
+)
+
+// Site is a loaded, validated site file.
+type Site struct {
+	File string // the path it was read from, as given
+	Name string
+
+	// Depth is the default depth (m) of planes that do not give their own;
+	// HasDepth says whether the file set it.
+	Depth    float64
+	HasDepth bool
+
+	Model     insitu.Model
+	Water     insitu.Water
+	Criterion planes.Criterion
+
+	// Planes are the inline planes, in file order.
+	Planes []Plane
+	// PlanesFile is the planes_file path resolved against the site file's
+	// folder, or "".
+	PlanesFile string
+
+	// ReportDepths are the depths of report.depths, or nil.
+	ReportDepths []float64
+
+	// Params lists every model parameter for the report, defaults included.
+	Params []Param
+	// Notes are things the reader should know about how the file was read
+	// (re-orthogonalised axes, say).
+	Notes []string
+
+	summary   []string // parts of Summary
+	inlineSet bool     // some inline plane has set:
+	fsys      fs.FS    // where planes_file is read from; nil for the OS
+}
+
+// Param is one input parameter as the report lists it.
+type Param struct {
+	Group   string // stress, water, strength
+	Name    string
+	Value   string
+	Unit    string
+	Source  string // the file's source: text, or ""
+	Default bool   // true when the file did not give it
+}
+
+// Summary is the model in one line, e.g.
+// "SHmax 1.3·Sv @ 065°, Shmin 0.8·Sv, Sv 0.0265 MPa/m, Pp hydrostatic below 12 m, μ = 0.6".
+func (s *Site) Summary() string { return strings.Join(s.summary, ", ") }
+
+// Load reads and validates the site file at path.
+func Load(path string) (*Site, error) {
+	data, err := os.ReadFile(path)
+	if err != nil {
+		return nil, fmt.Errorf("%s: cannot read the site file: %w", path, unwrapPath(err))
+	}
+	return Parse(data, path)
+}
+
+func unwrapPath(err error) error {
+	var pe *os.PathError
+	if errors.As(err, &pe) {
+		return pe.Err
+	}
+	return err
+}
+
+// Parse reads a site file from data; name is used in errors and to resolve
+// planes_file.
+func Parse(data []byte, name string) (*Site, error) {
+	dec := yaml.NewDecoder(bytes.NewReader(data))
+	var doc yaml.Node
+	if err := dec.Decode(&doc); err != nil {
+		if errors.Is(err, io.EOF) {
+			return nil, &Error{File: name, Msg: "the site file is empty: it needs at least site: and stress:"}
+		}
+		return nil, yamlError(name, err)
+	}
+	var extra yaml.Node
+	if err := dec.Decode(&extra); err == nil {
+		return nil, &Error{File: name, Line: extra.Line, Msg: "a second YAML document (---) follows: a site file holds one"}
+	}
+	root := node{file: name, n: resolveAlias(&doc)}
+	if root.n.Kind == yaml.DocumentNode && len(root.n.Content) == 1 {
+		root.n = resolveAlias(root.n.Content[0])
+	}
+	s := &Site{File: name}
+	if err := s.read(root); err != nil {
+		return nil, err
+	}
+	return s, nil
+}
+
+// ParseFS reads the site file name from fsys; its planes_file is read from
+// fsys too. It serves the demo embedded in the binary.
+func ParseFS(fsys fs.FS, name string) (*Site, error) {
+	data, err := fs.ReadFile(fsys, name)
+	if err != nil {
+		return nil, err
+	}
+	s, err := Parse(data, name)
+	if err != nil {
+		return nil, err
+	}
+	s.fsys = fsys
+	return s, nil
+}
+
+// yamlError turns the YAML library's syntax error into a one-line Error.
+func yamlError(name string, err error) error {
+	msg := err.Error()
+	msg = strings.TrimPrefix(msg, "yaml: ")
+	line := 0
+	if strings.HasPrefix(msg, "line ") {
+		var rest string
+		if n, _ := fmt.Sscanf(msg, "line %d:", &line); n == 1 {
+			if i := strings.Index(msg, ":"); i >= 0 {
+				rest = strings.TrimSpace(msg[i+1:])
+			}
+			msg = rest
+		}
+	}
+	return &Error{File: name, Line: line, Msg: "not valid YAML: " + msg}
+}
+
+var topKeys = []string{"site", "depth", "stress", "water", "strength", "planes", "planes_file", "report"}
+
+func (s *Site) read(root node) error {
+	f, err := root.mapping(topKeys...)
+	if err != nil {
+		return err
+	}
+	v, ok := f.get("site")
+	if !ok {
+		return f.missing("site", " (the site's name, shown on every output)")
+	}
+	if s.Name, err = v.text(); err != nil {
+		return err
+	}
+	if strings.TrimSpace(s.Name) == "" {
+		return v.errf("the site name is empty")
+	}
+	if s.Depth, s.HasDepth, err = f.optNumber("depth", unit(nonNegative, "m"), 0); err != nil {
+		return err
+	}
+	// Water and strength first: the stress model needs the water model, and
+	// the summary lists them after the stress.
+	if err := s.readWater(f); err != nil {
+		return err
+	}
+	sv, ok := f.get("stress")
+	if !ok {
+		return f.missing("stress", " (the far-field stress model)")
+	}
+	if err := s.readStress(sv); err != nil {
+		return err
+	}
+	s.summary = append(s.summary, describeWater(s.Water))
+	if err := s.readStrength(f); err != nil {
+		return err
+	}
+	if pv, ok := f.get("planes"); ok {
+		if err := s.readInlinePlanes(pv); err != nil {
+			return err
+		}
+	}
+	if pv, ok := f.get("planes_file"); ok {
+		p, err := pv.text()
+		if err != nil {
+			return err
+		}
+		if strings.TrimSpace(p) == "" {
+			return pv.errf("empty path")
+		}
+		if !filepath.IsAbs(p) {
+			p = filepath.Join(filepath.Dir(s.File), p)
+		}
+		s.PlanesFile = p
+	}
+	if rv, ok := f.get("report"); ok {
+		if err := s.readReport(rv); err != nil {
+			return err
+		}
+	}
+	return nil
+}
+
+func (s *Site) param(group, name string, value float64, unit, source string, def bool) {
+	s.Params = append(s.Params, Param{Group: group, Name: name, Value: fmtNum(value), Unit: unit, Source: source, Default: def})
+}
+
+func fmtNum(v float64) string {
+	return strings.TrimSuffix(strings.TrimRight(fmt.Sprintf("%.6f", v), "0"), ".")
+}
+
+func (s *Site) readWater(f *fields) error {
+	w := insitu.DefaultWater
+	v, ok := f.get("water")
+	if !ok {
+		s.Water = w
+		s.param("water", "gradient", w.Gradient, "MPa/m", "", true)
+		s.param("water", "table", w.Table, "m", "", true)
+		s.param("water", "biot", w.Biot, "", "", true)
+		return nil
+	}
+	m, err := v.mapping("gradient", "table", "biot", "dry", "source")
+	if err != nil {
+		return err
+	}
+	src, err := m.optText("source")
+	if err != nil {
+		return err
+	}
+	if dv, ok := m.get("dry"); ok {
+		if w.Dry, err = dv.boolean(); err != nil {
+			return err
+		}
+	}
+	if w.Dry {
+		if k := m.present("gradient", "table"); len(k) > 0 {
+			return v.errf("dry: true goes without %s", strings.Join(k, " and "))
+		}
+		s.Params = append(s.Params, Param{Group: "water", Name: "dry", Value: "true", Source: src})
+	} else {
+		var given bool
+		if w.Gradient, given, err = m.optNumber("gradient", unit(positive, "MPa/m"), insitu.Hydrostatic); err != nil {
+			return err
+		}
+		s.param("water", "gradient", w.Gradient, "MPa/m", src, !given)
+		if w.Table, given, err = m.optNumber("table", unit(nonNegative, "m"), 0); err != nil {
+			return err
+		}
+		s.param("water", "table", w.Table, "m", src, !given)
+	}
+	var given bool
+	if w.Biot, given, err = m.optNumber("biot", interval{lo: 0, hi: 1, openLo: true}, 1); err != nil {
+		return err
+	}
+	s.param("water", "biot", w.Biot, "", src, !given)
+	s.Water = w
+	return nil
+}
+
+func describeWater(w insitu.Water) string {
+	var d string
+	switch {
+	case w.Dry:
+		d = "dry (Pp = 0)"
+	case w.Gradient == insitu.Hydrostatic:
+		d = fmt.Sprintf("Pp hydrostatic below %s m", fmtNum(w.Table))
+	default:
+		d = fmt.Sprintf("Pp %s MPa/m below %s m", fmtNum(w.Gradient), fmtNum(w.Table))
+	}
+	if w.Biot != 1 {
+		d += fmt.Sprintf(", α = %s", fmtNum(w.Biot))
+	}
+	return d
+}
+
+func (s *Site) readStrength(f *fields) error {
+	v, ok := f.get("strength")
+	if !ok {
+		c, _ := planes.NewCoulomb(0.6, 0)
+		s.Criterion = c
+		s.param("strength", "friction", 0.6, "", "", true)
+		s.param("strength", "cohesion", 0, "MPa", "", true)
+		s.summary = append(s.summary, "μ = 0.6 (default)")
+		return nil
+	}
+	m, err := v.mapping("model", "friction", "cohesion", "jrc", "jcs", "residual_angle", "source")
+	if err != nil {
+		return err
+	}
+	src, err := m.optText("source")
+	if err != nil {
+		return err
+	}
+	model := "coulomb"
+	if mv, ok := m.get("model"); ok {
+		if model, err = mv.oneOf("coulomb", "barton-bandis"); err != nil {
+			return err
+		}
+	}
+	if model == "coulomb" {
+		if k := m.present("jrc", "jcs", "residual_angle"); len(k) > 0 {
+			return m.vals[k[0]].errf("goes with model: barton-bandis, not with the Coulomb criterion")
+		}
+		mu, given, err := m.optNumber("friction", positive, 0.6)
+		if err != nil {
+			return err
+		}
+		s.param("strength", "friction", mu, "", src, !given)
+		c, cgiven, err := m.optNumber("cohesion", unit(nonNegative, "MPa"), 0)
+		if err != nil {
+			return err
+		}
+		s.param("strength", "cohesion", c, "MPa", src, !cgiven)
+		s.Criterion = &planes.Coulomb{Mu: mu, Cohesion: c}
+		d := "μ = " + fmtNum(mu)
+		if c != 0 {
+			d += ", c = " + fmtNum(c) + " MPa"
+		}
+		s.summary = append(s.summary, d)
+		return nil
+	}
+	if k := m.present("friction", "cohesion"); len(k) > 0 {
+		return m.vals[k[0]].errf("goes with the Coulomb criterion, not with model: barton-bandis")
+	}
+	var vals [3]float64
+	for i, k := range []struct {
+		key  string
+		iv   interval
+		unit string
+	}{
+		{"jrc", interval{lo: 0, hi: 20}, ""},
+		{"jcs", unit(positive, "MPa"), "MPa"},
+		{"residual_angle", interval{lo: 0, hi: planes.MaxBartonAngle, openLo: true, openHi: true, unit: "°"}, "°"},
+	} {
+		kv, ok := m.get(k.key)
+		if !ok {
+			return m.missing(k.key, " (barton-bandis needs jrc, jcs and residual_angle)")
+		}
+		if vals[i], err = kv.numberIn(k.iv); err != nil {
+			return err
+		}
+		s.param("strength", k.key, vals[i], k.unit, src, false)
+	}
+	b, err := planes.NewBartonBandis(vals[0], vals[1], vals[2])
+	if err != nil {
+		return v.errf("%v", err)
+	}
+	s.Criterion = b
+	s.summary = append(s.summary, fmt.Sprintf("Barton–Bandis JRC %s, JCS %s MPa, φr %s°", fmtNum(vals[0]), fmtNum(vals[1]), fmtNum(vals[2])))
+	return nil
+}
+
+func (s *Site) readReport(v node) error {
+	m, err := v.mapping("depths")
+	if err != nil {
+		return err
+	}
+	dv, ok := m.get("depths")
+	if !ok {
+		return nil
+	}
+	items, err := dv.list()
+	if err != nil {
+		return err
+	}
+	if len(items) == 0 {
+		return dv.errf("the list is empty: give at least one depth, or leave report: out")
+	}
+	for _, it := range items {
+		z, err := it.numberIn(unit(nonNegative, "m"))
+		if err != nil {
+			return err
+		}
+		s.ReportDepths = append(s.ReportDepths, z)
+	}
+	return nil
+}

@@ -1,0 +1,240 @@
+package site
+
+import (
+	"encoding/csv"
+	"errors"
+	"fmt"
+	"io"
+	"os"
+	"path/filepath"
+	"strings"
+)
+
+// PlaneReader streams planes from a CSV table. The header row is required;
+// columns may come in any order; the known columns are name, dip,
+// dip_direction or strike (right-hand rule), depth, friction, cohesion and
+// pore_pressure, and any other column is carried through untouched. Lines
+// starting with # are comments. Lines are 1-indexed.
+type PlaneReader struct {
+	file       string
+	r          *csv.Reader
+	idx        [nCols]int // column index, −1 when absent
+	extra      []int      // indexes of the extra columns
+	ExtraNames []string
+	defaults   planeDefaults
+	vals       [nCols]string
+	present    [nCols]bool
+}
+
+// NewPlaneReader reads the header of the table in r; file names it in errors.
+func NewPlaneReader(r io.Reader, file string, d planeDefaults) (*PlaneReader, error) {
+	cr := csv.NewReader(r)
+	cr.ReuseRecord = true
+	cr.TrimLeadingSpace = true
+	cr.Comment = '#'
+	pr := &PlaneReader{file: file, r: cr, defaults: d}
+	head, err := cr.Read()
+	if errors.Is(err, io.EOF) {
+		return nil, &Error{File: file, Msg: "empty: want a header row naming the columns (name, dip, dip_direction, depth, …)"}
+	}
+	if err != nil {
+		return nil, pr.csvError(err)
+	}
+	line, _ := cr.FieldPos(0)
+	for i := range pr.idx {
+		pr.idx[i] = -1
+	}
+	seen := map[string]bool{}
+	for i, h := range head {
+		h = strings.ToLower(strings.TrimSpace(strings.TrimPrefix(h, "\ufeff")))
+		if h == "" {
+			return nil, &Error{File: file, Line: line, Msg: fmt.Sprintf("column %d has an empty name in the header", i+1)}
+		}
+		if seen[h] {
+			return nil, &Error{File: file, Line: line, Key: h, Msg: "this column appears twice in the header"}
+		}
+		seen[h] = true
+		known := false
+		for c, name := range colNames {
+			if h == name {
+				pr.idx[c] = i
+				known = true
+			}
+		}
+		if !known {
+			pr.extra = append(pr.extra, i)
+			pr.ExtraNames = append(pr.ExtraNames, h)
+		}
+	}
+	for c := range pr.idx {
+		pr.present[c] = pr.idx[c] >= 0
+	}
+	need := func(c int, why string) error {
+		return &Error{File: file, Line: line, Msg: fmt.Sprintf("the header has no %q column%s; it has: %s", colNames[c], why, strings.Join(head, ", "))}
+	}
+	switch {
+	case !pr.present[colName]:
+		return nil, need(colName, "")
+	case !pr.present[colDip]:
+		return nil, need(colDip, "")
+	case pr.present[colStrike] && pr.present[colDipDirection]:
+		return nil, &Error{File: file, Line: line, Msg: "the header has both strike and dip_direction: give one of the two"}
+	case !pr.present[colStrike] && !pr.present[colDipDirection]:
+		return nil, need(colDipDirection, " (or strike, right-hand rule)")
+	case !pr.present[colDepth] && !d.hasDepth:
+		return nil, need(colDepth, " and the site file gives no depth:")
+	}
+	return pr, nil
+}
+
+func (pr *PlaneReader) csvError(err error) error {
+	var pe *csv.ParseError
+	if errors.As(err, &pe) {
+		msg := pe.Err.Error()
+		if errors.Is(pe.Err, csv.ErrFieldCount) {
+			msg = fmt.Sprintf("this row has a different number of fields from the header (column %d): every row needs one value per header column", pe.Column)
+		}
+		return &Error{File: pr.file, Line: pe.Line, Msg: msg}
+	}
+	return &Error{File: pr.file, Msg: err.Error()}
+}
+
+// Next reads the next plane into p. It returns io.EOF after the last row.
+// p.Extras is reused between calls when it has the capacity.
+func (pr *PlaneReader) Next(p *Plane) error {
+	rec, err := pr.r.Read()
+	if err != nil {
+		if errors.Is(err, io.EOF) {
+			return io.EOF
+		}
+		return pr.csvError(err)
+	}
+	line, _ := pr.r.FieldPos(0)
+	for c, i := range pr.idx {
+		if i >= 0 {
+			pr.vals[c] = rec[i]
+		}
+	}
+	extras := p.Extras[:0]
+	q, err := parsePlane(&pr.vals, &pr.present, pr.defaults, func(col int, format string, a ...any) error {
+		return &Error{File: pr.file, Line: line, Key: fmt.Sprintf("%s (column %d)", colNames[col], pr.idx[col]+1), Msg: fmt.Sprintf(format, a...)}
+	})
+	if err != nil {
+		return err
+	}
+	for _, i := range pr.extra {
+		extras = append(extras, rec[i])
+	}
+	*p = q
+	p.Line = line
+	p.Extras = extras
+	return nil
+}
+
+// PlaneStream yields a site's planes: the inline planes, then those of
+// planes_file; or, when a planes table was named on the command line, only
+// those. Every plane carries one extra value per ExtraNames entry.
+type PlaneStream struct {
+	ExtraNames []string
+	inline     []Plane
+	next       int
+	table      *PlaneReader
+	closer     io.Closer
+	inlineSet  int // index of "set" among ExtraNames for inline planes, or −1
+	pad        int // empty extras appended to table rows
+}
+
+// OpenPlanes opens the planes of s. table, when not empty, names a CSV file
+// (or "-" for stdin) that replaces the site's planes.
+func (s *Site) OpenPlanes(table string, stdin io.Reader) (*PlaneStream, error) {
+	ps := &PlaneStream{inlineSet: -1}
+	var r io.Reader
+	name := table
+	switch {
+	case table == "-":
+		r, name = stdin, "standard input"
+	case table != "":
+		f, err := os.Open(table)
+		if err != nil {
+			return nil, fmt.Errorf("%s: cannot open the planes table: %w", table, unwrapPath(err))
+		}
+		r, ps.closer = f, f
+	default:
+		ps.inline = s.Planes
+		if s.PlanesFile != "" {
+			f, err := s.open(s.PlanesFile)
+			if err != nil {
+				return nil, fmt.Errorf("%s: planes_file %s: cannot open it: %w", s.File, s.PlanesFile, unwrapPath(err))
+			}
+			r, ps.closer, name = f, f, s.PlanesFile
+		}
+		if r == nil && len(s.Planes) == 0 {
+			return nil, &Error{File: s.File, Msg: "no planes: give planes: or planes_file: in the site file, or --planes FILE.csv"}
+		}
+	}
+	if r != nil {
+		t, err := NewPlaneReader(r, name, s.planeDefaults())
+		if err != nil {
+			ps.Close()
+			return nil, err
+		}
+		ps.table = t
+		ps.ExtraNames = append(ps.ExtraNames, t.ExtraNames...)
+	}
+	if len(ps.inline) > 0 && s.inlineSet {
+		for i, n := range ps.ExtraNames {
+			if n == "set" {
+				ps.inlineSet = i
+			}
+		}
+		if ps.inlineSet < 0 {
+			ps.inlineSet = len(ps.ExtraNames)
+			ps.ExtraNames = append(ps.ExtraNames, "set")
+			ps.pad = 1
+		}
+	}
+	return ps, nil
+}
+
+// Next reads the next plane into p; io.EOF after the last.
+func (ps *PlaneStream) Next(p *Plane) error {
+	if ps.next < len(ps.inline) {
+		q := ps.inline[ps.next]
+		ps.next++
+		extras := p.Extras[:0]
+		for range ps.ExtraNames {
+			extras = append(extras, "")
+		}
+		if ps.inlineSet >= 0 && len(q.Extras) > 0 {
+			extras[ps.inlineSet] = q.Extras[0]
+		}
+		*p = q
+		p.Extras = extras
+		return nil
+	}
+	if ps.table == nil {
+		return io.EOF
+	}
+	if err := ps.table.Next(p); err != nil {
+		return err
+	}
+	for range ps.pad {
+		p.Extras = append(p.Extras, "")
+	}
+	return nil
+}
+
+func (s *Site) open(name string) (io.ReadCloser, error) {
+	if s.fsys != nil {
+		return s.fsys.Open(filepath.ToSlash(name))
+	}
+	return os.Open(name)
+}
+
+// Close closes the table file, if any.
+func (ps *PlaneStream) Close() error {
+	if ps.closer != nil {
+		return ps.closer.Close()
+	}
+	return nil
+}

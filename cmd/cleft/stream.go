@@ -1,0 +1,117 @@
+package main
+
+import (
+	"errors"
+	"io"
+	"runtime"
+	"sync"
+
+	"cleft/cmd/cleft/site"
+	"cleft/cmd/cleft/table"
+	"cleft/planes"
+)
+
+// batchSize is the number of planes read, resolved and written together.
+const batchSize = 2048
+
+// batch is a run of planes on their way through the pipeline.
+type batch struct {
+	planes []site.Plane
+	n      int
+	first  bool  // holds the first row of the table
+	err    error // the reading error that ended the input after these rows
+	out    []byte
+	done   chan struct{}
+}
+
+// streamTable reads every plane of ps, resolves it and writes its row to w
+// in input order. Reading runs in one goroutine, resolving and formatting in
+// one per CPU, writing in the caller's; at most 2·workers + 1 batches are in
+// flight, so memory stays flat however long the input. On a bad row the rows
+// before it are written and its error returned.
+func streamTable(s *site.Site, ps *site.PlaneStream, f table.Format, w io.Writer) (int, error) {
+	workers := runtime.GOMAXPROCS(0)
+	inflight := 2*workers + 1
+	free := make(chan *batch, inflight)
+	for range inflight {
+		free <- &batch{planes: make([]site.Plane, batchSize), done: make(chan struct{})}
+	}
+	work := make(chan *batch, inflight)
+	order := make(chan *batch, inflight)
+	quit := make(chan struct{})
+
+	go func() { // reader
+		defer close(work)
+		defer close(order)
+		first := true
+		for {
+			var b *batch
+			select {
+			case b = <-free:
+			case <-quit:
+				return
+			}
+			b.n, b.err, b.first, b.out = 0, nil, first, b.out[:0]
+			b.done = make(chan struct{})
+			first = false
+			for b.n < batchSize {
+				if err := ps.Next(&b.planes[b.n]); err != nil {
+					if !errors.Is(err, io.EOF) {
+						b.err = err
+					}
+					break
+				}
+				b.n++
+			}
+			end := b.n < batchSize
+			order <- b
+			work <- b
+			if end {
+				return
+			}
+		}
+	}()
+
+	var wg sync.WaitGroup
+	for range workers {
+		wg.Add(1)
+		go func() {
+			defer wg.Done()
+			rv := s.Resolver()
+			var r planes.Result
+			for b := range work {
+				for i := range b.n {
+					p := &b.planes[i]
+					rv.Resolve(p, &r)
+					b.out = table.AppendRow(b.out, f, p, &r, ps.ExtraNames, b.first && i == 0)
+				}
+				close(b.done)
+			}
+		}()
+	}
+
+	rows := 0
+	var err error
+	if _, err = w.Write(table.Header(f, ps.ExtraNames)); err == nil {
+		for b := range order {
+			<-b.done
+			if _, err = w.Write(b.out); err != nil {
+				break
+			}
+			rows += b.n
+			if b.err != nil {
+				err = b.err
+				break
+			}
+			free <- b
+		}
+	}
+	if err == nil {
+		_, err = w.Write(table.Footer(f, rows))
+	}
+	close(quit)
+	for range order { // let the reader finish
+	}
+	wg.Wait()
+	return rows, err
+}

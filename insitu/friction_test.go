@@ -1,0 +1,53 @@
+package insitu
+
+import (
+	"math"
+	"testing"
+
+	"gonum.org/v1/gonum/floats/scalar"
+)
+
+func TestFrictionalLimit(t *testing.T) {
+	// Jaeger & Cook (1979); Zoback (2007), read: "for μ = 0.6 the ratio is
+	// 3.1" — [√(μ²+1)+μ]² = 3.1194 exactly. μ = 0.85 and 1 are derived from
+	// the same formula.
+	for _, c := range []struct{ mu, want, tol float64 }{
+		{0.6, 3.1, 0.05},
+		{0.6, 3.1194, 5e-5},
+		{0.85, 4.6761, 5e-5},
+		{1, 5.8284, 5e-5},
+	} {
+		if got := FrictionalLimit(c.mu); !scalar.EqualWithinAbs(got, c.want, c.tol) {
+			t.Errorf("FrictionalLimit(%v) = %v, want %v ± %v", c.mu, got, c.want, c.tol)
+		}
+	}
+	// Jaeger & Cook; Zoback (2007), read: the optimal plane lies at
+	// ½·atan(1/μ) from σ1, 29.5° for μ = 0.6.
+	if got := OptimalAngle(0.6); !scalar.EqualWithinAbs(got, 29.5, 0.05) {
+		t.Errorf("OptimalAngle(0.6) = %v, want 29.5", got)
+	}
+}
+
+func TestTsMaxAtFrictionalLimit(t *testing.T) {
+	// Derived (Mohr-circle tangent): Ts,max = (σ1'−σ3')/(2√(σ1'σ3')) equals μ
+	// when the effective ratio is at the frictional limit, for any μ.
+	for _, mu := range []float64{0.3, 0.6, 0.85, 1} {
+		r := FrictionalLimit(mu)
+		s3 := 10.0
+		s1 := r * s3
+		if got := (s1 - s3) / (2 * math.Sqrt(s1*s3)); !scalar.EqualWithinAbs(got, mu, tol) {
+			t.Errorf("μ = %v: Ts,max at the limit = %v", mu, got)
+		}
+	}
+}
+
+func TestEffectiveRatio(t *testing.T) {
+	s := State{Principal: Principal{Values: [3]float64{30, 20, 10}}, PorePressure: 4, Biot: 1}
+	if got := s.EffectiveRatio(); !scalar.EqualWithinAbs(got, 26.0/6, tol) {
+		t.Errorf("ratio = %v, want 26/6", got)
+	}
+	s.PorePressure = 10
+	if got := s.EffectiveRatio(); !math.IsInf(got, 1) {
+		t.Errorf("σ3' = 0: ratio = %v, want +Inf", got)
+	}
+}
