@@ -17,22 +17,26 @@ type node struct {
 	file string
 	path string
 	n    *yaml.Node
+	line int // line of the node's key, where it has one
 }
 
+// errf reports a problem with d at the line of its key (a block mapping's
+// content starts on the line after its key, which is not where a reader
+// looks), or of the node itself.
 func (d node) errf(format string, a ...any) *Error {
-	line := 0
-	if d.n != nil {
+	line := d.line
+	if line == 0 && d.n != nil {
 		line = d.n.Line
 	}
 	return &Error{File: d.file, Line: line, Key: d.path, Msg: fmt.Sprintf(format, a...)}
 }
 
-func (d node) child(key string, n *yaml.Node) node {
-	p := key
+func (d node) child(key *yaml.Node, n *yaml.Node) node {
+	p := key.Value
 	if d.path != "" {
-		p = d.path + "." + key
+		p = d.path + "." + key.Value
 	}
-	return node{file: d.file, path: p, n: resolveAlias(n)}
+	return node{file: d.file, path: p, n: resolveAlias(n), line: key.Line}
 }
 
 func resolveAlias(n *yaml.Node) *yaml.Node {
@@ -65,15 +69,18 @@ func (d node) mapping(allowed ...string) (*fields, error) {
 				break
 			}
 		}
+		kd := d.child(k, v)
 		if !ok {
 			msg := fmt.Sprintf("unknown key %q; allowed here: %s", name, strings.Join(allowed, ", "))
 			if s := suggest(name, allowed); s != "" {
 				msg = fmt.Sprintf("unknown key %q (did you mean %q?); allowed here: %s", name, s, strings.Join(allowed, ", "))
 			}
-			kd := d.child(name, k)
 			return nil, kd.errf("%s", msg)
 		}
-		f.vals[name] = d.child(name, v)
+		if prev, dup := f.keys[name]; dup {
+			return nil, kd.errf("this key is given twice (first at line %d)", prev.Line)
+		}
+		f.vals[name] = kd
 		f.keys[name] = k
 	}
 	return f, nil

@@ -195,7 +195,10 @@ func (s *Site) readInlinePlanes(v node) error {
 			return it.errf("give dip_direction or strike (right-hand rule), one of the two")
 		}
 		p, err := parsePlane(&vals, &present, d, func(col int, format string, a ...any) error {
-			return m.vals[colNames[col]].errf(format, a...)
+			if v, ok := m.get(colNames[col]); ok {
+				return v.errf(format, a...)
+			}
+			return it.errf(format, a...)
 		})
 		if err != nil {
 			if _, ok := err.(*Error); ok {

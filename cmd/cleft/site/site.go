@@ -8,6 +8,7 @@ import (
 	"io/fs"
 	"os"
 	"path/filepath"
+	"strconv"
 	"strings"
 
 	"cleft/insitu"
@@ -123,20 +124,35 @@ func ParseFS(fsys fs.FS, name string) (*Site, error) {
 }
 
 // yamlError turns the YAML library's syntax error into a one-line Error.
+// The library numbers the lines of its parser errors (as opposed to its
+// scanner errors) from 0 and leaves out "line 0"; they are renumbered here.
 func yamlError(name string, err error) error {
-	msg := err.Error()
-	msg = strings.TrimPrefix(msg, "yaml: ")
+	msg := strings.TrimPrefix(err.Error(), "yaml: ")
 	line := 0
-	if strings.HasPrefix(msg, "line ") {
-		var rest string
-		if n, _ := fmt.Sscanf(msg, "line %d:", &line); n == 1 {
-			if i := strings.Index(msg, ":"); i >= 0 {
-				rest = strings.TrimSpace(msg[i+1:])
+	if rest, ok := strings.CutPrefix(msg, "line "); ok {
+		if i := strings.Index(rest, ": "); i > 0 {
+			if n, err := strconv.Atoi(rest[:i]); err == nil {
+				line, msg = n, rest[i+2:]
 			}
-			msg = rest
+		}
+	}
+	for _, p := range parserProblems {
+		if strings.HasPrefix(msg, p) {
+			line++
+			break
 		}
 	}
 	return &Error{File: name, Line: line, Msg: "not valid YAML: " + msg}
+}
+
+// parserProblems are the YAML library's parser (not scanner) messages.
+var parserProblems = []string{
+	"did not find expected <stream-start>", "did not find expected <document start>",
+	"found undefined tag handle", "did not find expected node content",
+	"did not find expected '-' indicator", "did not find expected key",
+	"did not find expected ',' or ']'", "did not find expected ',' or '}'",
+	"found duplicate %YAML directive", "found incompatible YAML document",
+	"found duplicate %TAG directive",
 }
 
 var topKeys = []string{"site", "depth", "stress", "water", "strength", "planes", "planes_file", "report"}

@@ -1,0 +1,108 @@
+package site
+
+import (
+	"math"
+	"strings"
+	"testing"
+
+	"cleft/insitu"
+	"cleft/planes"
+
+	"gonum.org/v1/gonum/floats/scalar"
+)
+
+const minimal = `site: t
+stress:
+  vertical: {density: 2700}
+  shmax: {ratio: 1.3, azimuth: 65}
+  shmin: {ratio: 0.8}
+`
+
+func TestParseDefaults(t *testing.T) {
+	s, err := Parse([]byte(minimal), "t.yaml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	if s.Water != insitu.DefaultWater {
+		t.Errorf("water = %+v, want the default hydrostatic model", s.Water)
+	}
+	c, ok := s.Criterion.(*planes.Coulomb)
+	if !ok || c.Mu != 0.6 || c.Cohesion != 0 {
+		t.Errorf("criterion = %v, want Coulomb μ 0.6 (default)", s.Criterion)
+	}
+	defaults := 0
+	for _, p := range s.Params {
+		if p.Default {
+			defaults++
+		}
+	}
+	if defaults != 5 { // water gradient, table, biot; friction, cohesion
+		t.Errorf("%d parameters marked default, want 5: %+v", defaults, s.Params)
+	}
+	// Density 2700 kg/m³ → 0.026487 MPa/m (ρ·g with g = 9.81, common practice).
+	st := s.Model.At(100)
+	if !scalar.EqualWithinAbs(st.Total.DD, 2.6487, 1e-9) {
+		t.Errorf("Sv(100 m) = %v, want 2.6487", st.Total.DD)
+	}
+	if got := s.Summary(); !strings.Contains(got, "SHmax 1.3·Sv @ 065°") || !strings.Contains(got, "μ = 0.6 (default)") {
+		t.Errorf("summary %q", got)
+	}
+}
+
+func TestSheoreyAppliesToBoth(t *testing.T) {
+	s, err := Parse([]byte(`site: t
+stress:
+  vertical: {gradient: 0.027}
+  shmax: {sheorey: {modulus: 50}, azimuth: 10}
+water: {dry: true}
+`), "t.yaml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	st := s.Model.At(1000)
+	// Sheorey (1994) as given by Hoek, derived: k(50 GPa, 1000 m) = 0.95.
+	want := 0.95 * 27
+	if v := st.Principal.Values; !scalar.EqualWithinAbs(v[2], want, 1e-9) || !scalar.EqualWithinAbs(v[1], want, 1e-9) {
+		t.Errorf("horizontal stresses %v, want both %v", v, want)
+	}
+}
+
+func TestPlaneOverrides(t *testing.T) {
+	s, err := Parse([]byte(minimal+`depth: 80
+strength: {friction: 0.7, cohesion: 0.1}
+planes:
+  - {name: A, dip: 60, dip_direction: 10}
+  - {name: B, dip: 60, dip_direction: 10, friction: 0.3, pore_pressure: 2.5, depth: 200}
+`), "t.yaml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	a, b := &s.Planes[0], &s.Planes[1]
+	if a.Depth != 80 || !math.IsNaN(a.Friction) || !math.IsNaN(a.PorePressure) {
+		t.Errorf("A = %+v, want the site depth and no overrides", a)
+	}
+	var scratch planes.Coulomb
+	if c := s.CriterionFor(b, &scratch).(*planes.Coulomb); c.Mu != 0.3 || c.Cohesion != 0.1 {
+		t.Errorf("B criterion %v, want μ 0.3 with the site cohesion 0.1", c)
+	}
+	rv := s.Resolver()
+	var r planes.Result
+	rv.Resolve(b, &r)
+	if r.PorePressure != 2.5 {
+		t.Errorf("B pore pressure %v, want the override 2.5", r.PorePressure)
+	}
+	rv.Resolve(a, &r)
+	if want := s.Water.Pressure(80); r.PorePressure != want {
+		t.Errorf("A pore pressure %v after B, want the model's %v", r.PorePressure, want)
+	}
+}
+
+func TestPlanesFileRelativeToSite(t *testing.T) {
+	s, err := Parse([]byte(minimal+"planes_file: joints.csv\n"), "some/dir/site.yaml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	if s.PlanesFile != "some/dir/joints.csv" {
+		t.Errorf("planes_file resolved to %q", s.PlanesFile)
+	}
+}
