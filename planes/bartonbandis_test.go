@@ -3,6 +3,8 @@ package planes
 import (
 	"testing"
 
+	"cleft/insitu"
+
 	"gonum.org/v1/gonum/floats/scalar"
 )
 
@@ -45,6 +47,24 @@ func TestCoulombRejects(t *testing.T) {
 	for _, bad := range [][2]float64{{0, 0}, {-0.6, 0}, {0.6, -1}} {
 		if _, err := NewCoulomb(bad[0], bad[1]); err == nil {
 			t.Errorf("NewCoulomb%v: no error", bad)
+		}
+	}
+}
+
+func TestResolveBartonBandis(t *testing.T) {
+	// With a non-linear criterion the pressure to slip comes from the
+	// bracketed root: after that rise the factor of safety is 1.
+	b, _ := NewBartonBandis(12, 70, 28)
+	s := insitu.NewState(insitu.Andersonian(30, 14, 20, 20), 500, 3, 1)
+	for _, o := range []Orientation{MustNew(85, 65), MustNew(40, 200), MustNew(60, 110)} {
+		r := Resolve(s, o, b)
+		if want := b.Strength(r.EffectiveNormal) / r.Shear; !scalar.EqualWithinAbsOrRel(r.FactorOfSafety, want, 1e-12, 1e-12) {
+			t.Errorf("%v: FS %v, want %v", o, r.FactorOfSafety, want)
+		}
+		q := s
+		q.PorePressure += r.PressureToSlip
+		if got := Resolve(q, o, b); !scalar.EqualWithinAbs(got.FactorOfSafety, 1, 1e-9) {
+			t.Errorf("%v: FS after ΔPp %v = %v, want 1", o, r.PressureToSlip, got.FactorOfSafety)
 		}
 	}
 }

@@ -242,10 +242,10 @@ func (a *assessment) summary(b *strings.Builder) {
 		ds[i] = fmt.Sprintf("%g", z)
 	}
 	if len(over) == 0 {
-		fmt.Fprintf(b, "Frictional limit: the stress model is within it at %s m (largest (σ1−αPp)/(σ3−αPp) %.2f at %g m, limit %.2f for μ = %g).\n",
+		fmt.Fprintf(b, "Frictional limit: the stress model is within it at %s m (largest (σ1−αPp)/(σ3−αPp) %.2f at %g m, limit %.2f for μ = %.4g).\n",
 			strings.Join(ds, ", "), worst, at, limit, float64(a.states[0].Friction))
 	} else {
-		fmt.Fprintf(b, "Frictional limit: EXCEEDED at %s (limit %.2f for μ = %g): such a state would already have slipped on optimally oriented planes; check the stress estimate.\n",
+		fmt.Fprintf(b, "Frictional limit: EXCEEDED at %s (limit %.2f for μ = %.4g): such a state would already have slipped on optimally oriented planes; check the stress estimate.\n",
 			strings.Join(over, ", "), limit, float64(a.states[0].Friction))
 	}
 }

@@ -207,7 +207,7 @@ func (r stressRow) text(b *strings.Builder) {
 	if r.Exceeds {
 		verdict = "EXCEEDS the limit: such a state would already have slipped on optimally oriented planes; check the stress estimate"
 	}
-	fmt.Fprintf(b, "  frictional limit: (σ1−αPp)/(σ3−αPp) = %s against %.3f for μ = %s — %s\n", ratio, float64(r.Limit), fmtG(float64(r.Friction)), verdict)
+	fmt.Fprintf(b, "  frictional limit: (σ1−αPp)/(σ3−αPp) = %s against %.3f for μ = %s — %s\n", ratio, float64(r.Limit), strconv.FormatFloat(float64(r.Friction), 'g', 4, 64), verdict)
 }
 
 func fmtF(n num) string { return fmt.Sprintf("%.4f", float64(n)+0) }
