@@ -14,8 +14,10 @@ import (
 	"cleft/cmd/cleft/site"
 	"cleft/cmd/cleft/table"
 	"cleft/planes"
+	"cleft/plots"
 
 	"github.com/spf13/cobra"
+	"gonum.org/v1/plot/vg"
 )
 
 type assessOptions struct {
@@ -33,6 +35,9 @@ func newAssessCmd() *cobra.Command {
 
   planes.csv, planes.json   the plane table (see cleft resolve), input order
   stress.json               the stress state at the report depths
+  stereonet-slip.svg/.png   tendency stereonet of slip tendency (see cleft plot)
+  stereonet-dilation.svg/.png  the same for dilation tendency
+  mohr.svg/.png             Mohr diagram of effective stress
 
 and prints a short summary: how many planes are critical or opening, the
 least stable three, and the frictional-limit check of the stress model.
@@ -108,9 +113,31 @@ func runAssess(o assessOptions, stdout io.Writer) error {
 		}
 		wrote = append(wrote, path)
 	}
+	fo := figureOptions{depth: math.NaN(), proj: plots.EqualArea, traces: "unstable"}
+	for _, f := range []struct {
+		name string
+		fig  plots.Figure
+		w, h vg.Length
+	}{
+		{"stereonet-slip", a.stereonet(fo.with(plots.SlipTendency)), cm(0, 19), cm(0, 13.5)},
+		{"stereonet-dilation", a.stereonet(fo.with(plots.DilationTendency)), cm(0, 19), cm(0, 13.5)},
+		{"mohr", a.mohr(fo), cm(0, 17), cm(0, 12)},
+	} {
+		for _, ext := range []string{".svg", ".png"} {
+			path := filepath.Join(o.out, f.name+ext)
+			if err := writeFigure(f.fig, f.w, f.h, path); err != nil {
+				return err
+			}
+			wrote = append(wrote, path)
+		}
+	}
 	var b strings.Builder
 	a.summary(&b)
-	fmt.Fprintf(&b, "\nWrote %s.\n\n%s\n", strings.Join(wrote, ", "), caution)
+	names := make([]string, len(wrote))
+	for i, w := range wrote {
+		names[i] = filepath.Base(w)
+	}
+	fmt.Fprintf(&b, "\nWrote %d files to %s: %s.\n\n%s\n", len(wrote), o.out, strings.Join(names, ", "), caution)
 	_, err = io.WriteString(stdout, b.String())
 	return err
 }

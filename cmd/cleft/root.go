@@ -75,6 +75,7 @@ below ground; angles in degrees, azimuths clockwise from north.
 		newResolveCmd(),
 		newStressCmd(),
 		newAssessCmd(),
+		newPlotCmd(),
 		newExampleCmd(),
 	)
 	root.CompletionOptions.DisableDefaultCmd = true

@@ -1,0 +1,139 @@
+package main
+
+import (
+	"math"
+	"strings"
+
+	"cleft/cmd/cleft/demo"
+	"cleft/cmd/cleft/site"
+	"cleft/plots"
+
+	"github.com/spf13/cobra"
+	"gonum.org/v1/plot/vg"
+)
+
+type plotOptions struct {
+	site       string
+	example    bool
+	kind       string
+	measure    string
+	depth      float64
+	projection string
+	grid       bool
+	contours   []float64
+	traces     string
+	out        string
+	width      float64
+	height     float64
+}
+
+func newPlotCmd() *cobra.Command {
+	var o plotOptions
+	c := &cobra.Command{
+		Use:   "plot (SITE.yaml | --example) --kind stereonet|mohr --out FILE.{png,svg,pdf}",
+		Short: "A tendency stereonet or a Mohr diagram of the site",
+		Long: `plot draws one figure; the format follows the file extension.
+
+stereonet: the poles of the planes, coloured by the chosen measure at their
+own depths and shaped by their state (circle stable, triangle critical,
+square opening), over the measure for every orientation at --depth, with
+contours, the line where the factor of safety is 1, the principal stress axes
+and the great circles of chosen planes.
+
+mohr: the three effective Mohr circles at --depth, every plane's point at
+that depth, the strength envelopes in use and the pore-pressure rise that
+brings the most critical plane to its envelope.
+
+The default depth is the site's depth:, else the median plane depth.
+Measures: ` + strings.Join(plots.Measures(), ", ") + `.
+
+` + caution,
+		Args: func(cmd *cobra.Command, args []string) error {
+			if o.example {
+				if len(args) > 0 {
+					return usagef("give a site file or --example, not both")
+				}
+				return nil
+			}
+			return oneSite(cmd, args)
+		},
+		RunE: func(cmd *cobra.Command, args []string) error {
+			if len(args) == 1 {
+				o.site = args[0]
+			}
+			return runPlot(o, cmd)
+		},
+	}
+	f := c.Flags()
+	f.BoolVar(&o.example, "example", false, "plot the built-in demo site (invented data)")
+	f.StringVar(&o.kind, "kind", "stereonet", "stereonet or mohr")
+	f.StringVar(&o.measure, "measure", "slip-tendency", "stereonet colour: "+strings.Join(plots.Measures(), ", "))
+	f.Float64Var(&o.depth, "depth", math.NaN(), "depth below ground of the field and the Mohr circles, m")
+	f.StringVar(&o.projection, "projection", "equal-area", "equal-area or equal-angle (lower hemisphere)")
+	f.BoolVar(&o.grid, "grid", false, "draw a 10° grid of plunge circles and trend radials")
+	f.Float64SliceVar(&o.contours, "contours", nil, "contour levels of the measure, e.g. 0.2,0.4,0.6")
+	f.StringVar(&o.traces, "great-circles", "unstable", "great circles to draw: unstable, all, none, or plane names")
+	f.StringVar(&o.out, "out", "", "output file: .png, .svg or .pdf")
+	f.Float64Var(&o.width, "width", 0, "figure width, cm (default 19 for a stereonet, 17 for a Mohr diagram)")
+	f.Float64Var(&o.height, "height", 0, "figure height, cm (default 13.5 for a stereonet, 12 for a Mohr diagram)")
+	return c
+}
+
+func runPlot(o plotOptions, cmd *cobra.Command) error {
+	if o.out == "" {
+		return usagef("give --out FILE.png, .svg or .pdf")
+	}
+	if _, err := plots.FormatOf(o.out); err != nil {
+		return usageError{err}
+	}
+	if o.kind != "stereonet" && o.kind != "mohr" {
+		return usagef("--kind %q: want stereonet or mohr", o.kind)
+	}
+	m, err := plots.ParseMeasure(o.measure)
+	if err != nil {
+		return usageError{err}
+	}
+	proj, err := plots.ParseProjection(o.projection)
+	if err != nil {
+		return usageError{err}
+	}
+	if !math.IsNaN(o.depth) && (o.depth < 0 || math.IsInf(o.depth, 0)) {
+		return usagef("--depth %v: want a depth ≥ 0 m below ground", o.depth)
+	}
+	for _, v := range []float64{o.width, o.height} {
+		if v != 0 && (v < 4 || v > 100) {
+			return usagef("--width/--height %v cm: want 4 to 100 cm", v)
+		}
+	}
+	var s *site.Site
+	if o.example {
+		s, err = site.ParseFS(demo.FS, demo.Site)
+	} else {
+		s, err = site.Load(o.site)
+	}
+	if err != nil {
+		return err
+	}
+	a, err := assess(s)
+	if err != nil {
+		return err
+	}
+	if err := a.checkTraces(o.traces); err != nil {
+		return err
+	}
+	fo := figureOptions{measure: m, depth: o.depth, proj: proj, grid: o.grid, contours: o.contours, traces: o.traces}
+	w, h := cm(o.width, 19), cm(o.height, 13.5)
+	var fig plots.Figure = a.stereonet(fo)
+	if o.kind == "mohr" {
+		w, h = cm(o.width, 17), cm(o.height, 12)
+		fig = a.mohr(fo)
+	}
+	return writeFigure(fig, w, h, o.out)
+}
+
+func cm(v, def float64) vg.Length {
+	if v == 0 {
+		v = def
+	}
+	return vg.Length(v) * vg.Centimeter
+}
