@@ -92,7 +92,9 @@ func (s *Stereonet) drawKey(c draw.Canvas, lo, hi float64) {
 			c.StrokeLine2(draw.LineStyle{Color: ink, Width: vg.Points(0.9)}, a.X-6, a.Y, a.X+6, a.Y)
 		}, "great circle of a named plane")
 	}
-	row(func(a vg.Point) { c.DrawGlyph(draw.GlyphStyle{Color: undefinedFill, Radius: vg.Points(4), Shape: draw.BoxGlyph{}}, a) }, "grey: value undefined")
+	row(func(a vg.Point) {
+		c.DrawGlyph(draw.GlyphStyle{Color: undefinedFill, Radius: vg.Points(4), Shape: draw.BoxGlyph{}}, a)
+	}, "grey: value undefined")
 }
 
 func (s *Stereonet) slipLineText() string {

@@ -35,9 +35,9 @@ type Stereonet struct {
 	Criterion planes.Criterion
 	Measure   Measure
 	Proj      Projection
-	Grid     bool      // draw a 10° polar grid (plunge circles, trend radials)
-	Contours []float64 // levels; nil for the measure's defaults
-	Poles    []Pole
+	Grid      bool      // draw a 10° polar grid (plunge circles, trend radials)
+	Contours  []float64 // levels; nil for the measure's defaults
+	Poles     []Pole
 
 	// Field is the tendency field, computed by Draw at the resolution the
 	// canvas needs (FieldSize) and kept for inspection.
