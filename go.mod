@@ -5,7 +5,11 @@ go 1.26.8
 require (
 	github.com/spf13/cobra v1.10.2
 	go.yaml.in/yaml/v3 v3.0.6
+	golang.org/x/image v0.30.0
+	golang.org/x/net v0.62.0
 	gonum.org/v1/gonum v0.17.0
+	gonum.org/v1/plot v0.17.0
+	rsc.io/pdf v0.1.1
 )
 
 require (
@@ -17,8 +21,5 @@ require (
 	github.com/golang/freetype v0.0.0-20170609003504-e2365dfdc4a0 // indirect
 	github.com/inconshreveable/mousetrap v1.1.0 // indirect
 	github.com/spf13/pflag v1.0.9 // indirect
-	golang.org/x/image v0.30.0 // indirect
-	golang.org/x/text v0.28.0 // indirect
-	gonum.org/v1/plot v0.17.0 // indirect
-	rsc.io/pdf v0.1.1 // indirect
+	golang.org/x/text v0.43.0 // indirect
 )

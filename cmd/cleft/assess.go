@@ -17,7 +17,6 @@ import (
 	"cleft/plots"
 
 	"github.com/spf13/cobra"
-	"gonum.org/v1/plot/vg"
 )
 
 type assessOptions struct {
@@ -73,6 +72,7 @@ type assessment struct {
 	results []planes.Result
 	depths  []float64
 	states  []stressRow
+	inputs  []plots.InputFile // the input files with their SHA-256
 }
 
 func runAssess(o assessOptions, stdout io.Writer) error {
@@ -113,23 +113,32 @@ func runAssess(o assessOptions, stdout io.Writer) error {
 		}
 		wrote = append(wrote, path)
 	}
-	fo := figureOptions{depth: math.NaN(), proj: plots.EqualArea, traces: "unstable"}
-	for _, f := range []struct {
-		name string
-		fig  plots.Figure
-		w, h vg.Length
-	}{
-		{"stereonet-slip", a.stereonet(fo.with(plots.SlipTendency)), cm(0, 19), cm(0, 13.5)},
-		{"stereonet-dilation", a.stereonet(fo.with(plots.DilationTendency)), cm(0, 19), cm(0, 13.5)},
-		{"mohr", a.mohr(fo), cm(0, 17), cm(0, 12)},
-	} {
+	figs := a.figures()
+	for _, f := range figs {
 		for _, ext := range []string{".svg", ".png"} {
-			path := filepath.Join(o.out, f.name+ext)
-			if err := writeFigure(f.fig, f.w, f.h, path); err != nil {
+			path := filepath.Join(o.out, f.file+ext)
+			if err := writeFigure(f.Figure, f.W, f.H, path); err != nil {
 				return err
 			}
 			wrote = append(wrote, path)
 		}
+	}
+	rep, err := a.report(o.example, figs)
+	if err != nil {
+		return err
+	}
+	for _, f := range []struct {
+		name  string
+		write func(io.Writer) error
+	}{
+		{"report.html", rep.WriteHTML},
+		{"summary.json", func(w io.Writer) error { return writeJSON(w, a.facts()) }},
+	} {
+		path := filepath.Join(o.out, f.name)
+		if err := writeFile(path, f.write); err != nil {
+			return err
+		}
+		wrote = append(wrote, path)
 	}
 	var b strings.Builder
 	a.summary(&b)
@@ -149,7 +158,7 @@ func assess(s *site.Site) (*assessment, error) {
 		return nil, err
 	}
 	defer ps.Close()
-	a := &assessment{site: s, extras: ps.ExtraNames}
+	a := &assessment{site: s, extras: ps.ExtraNames, inputs: []plots.InputFile{{Name: s.File, SHA256: s.SHA256}}}
 	rv := s.Resolver()
 	for {
 		var p site.Plane
@@ -166,6 +175,9 @@ func assess(s *site.Site) (*assessment, error) {
 	}
 	if len(a.planes) == 0 {
 		return nil, &site.Error{File: s.File, Msg: "no planes to assess: the planes table has a header but no rows"}
+	}
+	if name, sum := ps.Table(); name != "" {
+		a.inputs = append(a.inputs, plots.InputFile{Name: name, SHA256: sum})
 	}
 	a.depths = s.ReportDepths
 	if len(a.depths) == 0 {
@@ -228,51 +240,28 @@ func (a *assessment) summary(b *strings.Builder) {
 	for _, n := range s.Notes {
 		fmt.Fprintf(b, "Note: %s\n", n)
 	}
-	var crit, open int
-	for _, r := range a.results {
-		switch r.State {
-		case planes.Critical:
-			crit++
-		case planes.Opening:
-			open++
+	b.WriteString("\n")
+	for _, l := range a.facts().sentences() {
+		b.WriteString(wrap(l, 88))
+		b.WriteString("\n")
+	}
+}
+
+// wrap breaks text into lines of at most width runes, at spaces.
+func wrap(text string, width int) string {
+	var b strings.Builder
+	n := 0
+	for i, w := range strings.Fields(text) {
+		l := len([]rune(w))
+		if i > 0 && n+1+l > width {
+			b.WriteString("\n")
+			n = 0
+		} else if i > 0 {
+			b.WriteString(" ")
+			n++
 		}
+		b.WriteString(w)
+		n += l
 	}
-	fmt.Fprintf(b, "\n%d planes: %d critical, %d opening, %d stable.\n", len(a.results), crit, open, len(a.results)-crit-open)
-	b.WriteString("Least stable:\n")
-	rank := a.ranked()
-	w := 4
-	for _, i := range rank[:min(3, len(rank))] {
-		w = max(w, len(a.planes[i].Name))
-	}
-	for _, i := range rank[:min(3, len(rank))] {
-		p, r := a.planes[i], a.results[i]
-		fs := "FS —"
-		if !math.IsNaN(r.FactorOfSafety) {
-			fs = fmt.Sprintf("FS %.2f", r.FactorOfSafety)
-		}
-		fmt.Fprintf(b, "  %-*s  %s at %g m  %-8s  σn' %.2f MPa, %s, pressure to slip %+.2f MPa\n",
-			w, p.Name, p.Orientation, p.Depth, r.State, r.EffectiveNormal, fs, r.PressureToSlip)
-	}
-	worst, at := math.Inf(-1), 0.0
-	var over []string
-	for _, st := range a.states {
-		if f := float64(st.Ratio); f > worst || math.IsNaN(worst) {
-			worst, at = f, float64(st.Depth)
-		}
-		if st.Exceeds {
-			over = append(over, fmt.Sprintf("%g m", float64(st.Depth)))
-		}
-	}
-	limit := float64(a.states[0].Limit)
-	ds := make([]string, len(a.depths))
-	for i, z := range a.depths {
-		ds[i] = fmt.Sprintf("%g", z)
-	}
-	if len(over) == 0 {
-		fmt.Fprintf(b, "Frictional limit: the stress model is within it at %s m (largest (σ1−αPp)/(σ3−αPp) %.2f at %g m, limit %.2f for μ = %.4g).\n",
-			strings.Join(ds, ", "), worst, at, limit, float64(a.states[0].Friction))
-	} else {
-		fmt.Fprintf(b, "Frictional limit: EXCEEDED at %s (limit %.2f for μ = %.4g): such a state would already have slipped on optimally oriented planes; check the stress estimate.\n",
-			strings.Join(over, ", "), limit, float64(a.states[0].Friction))
-	}
+	return b.String()
 }

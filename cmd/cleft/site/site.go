@@ -2,6 +2,8 @@ package site
 
 import (
 	"bytes"
+	"crypto/sha256"
+	"encoding/hex"
 	"errors"
 	"fmt"
 	"io"
@@ -19,8 +21,9 @@ import (
 
 // Site is a loaded, validated site file.
 type Site struct {
-	File string // the path it was read from, as given
-	Name string
+	File   string // the path it was read from, as given
+	SHA256 string // of the site file's bytes, hex
+	Name   string
 
 	// Depth is the default depth (m) of planes that do not give their own;
 	// HasDepth says whether the file set it.
@@ -101,7 +104,8 @@ func Parse(data []byte, name string) (*Site, error) {
 	if root.n.Kind == yaml.DocumentNode && len(root.n.Content) == 1 {
 		root.n = resolveAlias(root.n.Content[0])
 	}
-	s := &Site{File: name}
+	sum := sha256.Sum256(data)
+	s := &Site{File: name, SHA256: hex.EncodeToString(sum[:])}
 	if err := s.read(root); err != nil {
 		return nil, err
 	}

@@ -1,9 +1,12 @@
 package site
 
 import (
+	"crypto/sha256"
 	"encoding/csv"
+	"encoding/hex"
 	"errors"
 	"fmt"
+	"hash"
 	"io"
 	"os"
 	"path/filepath"
@@ -136,6 +139,8 @@ func (pr *PlaneReader) Next(p *Plane) error {
 // those. Every plane carries one extra value per ExtraNames entry.
 type PlaneStream struct {
 	ExtraNames []string
+	tableName  string
+	hash       hash.Hash // of the table's bytes as read
 	inline     []Plane
 	next       int
 	table      *PlaneReader
@@ -173,6 +178,8 @@ func (s *Site) OpenPlanes(table string, stdin io.Reader) (*PlaneStream, error) {
 		}
 	}
 	if r != nil {
+		ps.tableName, ps.hash = name, sha256.New()
+		r = io.TeeReader(r, ps.hash)
 		t, err := NewPlaneReader(r, name, s.planeDefaults())
 		if err != nil {
 			ps.Close()
@@ -194,6 +201,16 @@ func (s *Site) OpenPlanes(table string, stdin io.Reader) (*PlaneStream, error) {
 		}
 	}
 	return ps, nil
+}
+
+// Table returns the planes table's name and the SHA-256 (hex) of the bytes
+// read from it so far: of the whole table once Next has returned io.EOF.
+// The name is "" when the planes are all inline.
+func (ps *PlaneStream) Table() (name, sum string) {
+	if ps.hash == nil {
+		return "", ""
+	}
+	return ps.tableName, hex.EncodeToString(ps.hash.Sum(nil))
 }
 
 // Next reads the next plane into p; io.EOF after the last.

@@ -1,0 +1,111 @@
+package main
+
+import (
+	"fmt"
+	"math"
+	"sort"
+	"strings"
+	"time"
+
+	"cleft/plots"
+)
+
+// now is the clock of the report header; tests may fix it.
+var now = time.Now
+
+// report builds the effective-stress report of the assessment.
+func (a *assessment) report(example bool, figs []namedFigure) (*plots.Report, error) {
+	s := a.site
+	r := &plots.Report{
+		Site:      s.Name,
+		Generated: now(),
+		Version:   version,
+		Model:     s.Summary(),
+		Summary:   a.facts().sentences(),
+		Notes:     s.Notes,
+		Criterion: s.Criterion.String(),
+		Caution:   strings.TrimPrefix(caution, "Caution: "),
+	}
+	for _, in := range a.inputs {
+		if example {
+			in.Name += " (built-in demo)"
+		}
+		r.Inputs = append(r.Inputs, in)
+	}
+	for _, p := range s.Params {
+		r.Params = append(r.Params, plots.Param{Group: p.Group, Name: p.Name, Value: p.Value, Unit: p.Unit, Source: p.Source, Default: p.Default})
+	}
+	for _, z := range a.depths {
+		r.States = append(r.States, plots.DepthState{State: s.Model.At(z), Friction: s.Criterion.Friction()})
+	}
+	setCol := -1
+	for i, n := range a.extras {
+		if n == "set" {
+			setCol = i
+		}
+	}
+	r.BySet = setCol >= 0
+	for _, i := range a.ranked() {
+		p := a.planes[i]
+		rp := plots.ReportPlane{Name: p.Name, Orientation: p.Orientation, Depth: p.Depth, Result: a.results[i]}
+		if setCol >= 0 {
+			rp.Set = p.Extras[setCol]
+		}
+		r.Planes = append(r.Planes, rp)
+	}
+	if r.BySet { // sets in order of their least stable plane; stable sort keeps the rank
+		first := map[string]int{}
+		for k, p := range r.Planes {
+			if _, ok := first[p.Set]; !ok {
+				first[p.Set] = k
+			}
+		}
+		sort.SliceStable(r.Planes, func(i, j int) bool { return first[r.Planes[i].Set] < first[r.Planes[j].Set] })
+	}
+	for _, f := range figs {
+		r.Figures = append(r.Figures, f.ReportFigure)
+	}
+	return r, nil
+}
+
+// namedFigure is a figure of the assessment with its file name.
+type namedFigure struct {
+	file string // without extension
+	plots.ReportFigure
+}
+
+// figures are the assessment's figures, built once for the files and the
+// report: the slip and dilation stereonets and the Mohr diagram at the
+// figure depth.
+func (a *assessment) figures() []namedFigure {
+	fo := figureOptions{depth: math.NaN(), proj: plots.EqualArea, traces: "unstable"}
+	z := a.figureDepth()
+	return []namedFigure{
+		{"stereonet-slip", plots.ReportFigure{
+			Title: fmt.Sprintf("Slip tendency of every plane, and of every orientation at %g m", z),
+			Caption: fmt.Sprintf("Lower-hemisphere equal-area net of poles to planes. Each pole is coloured by the plane's own slip tendency Ts = τ/σn' at its own depth and shaped by its state (circle stable, triangle critical, square with a cross opening). The paler background is Ts for every orientation at %g m with the site's water model and strength; thin lines are its contours, the dark red line (if any) is where the factor of safety is 1 and orientations past it would slip. Black symbols are the principal stress axes; great circles are drawn for the critical and opening planes. %s",
+				z, traceNote(a)),
+			Figure: a.stereonet(fo.with(plots.SlipTendency)), W: cm(0, 19), H: cm(0, 13.5)}},
+		{"stereonet-dilation", plots.ReportFigure{
+			Title:   fmt.Sprintf("Dilation tendency of every plane, and of every orientation at %g m", z),
+			Caption: "As Figure 1 for the dilation tendency Td = (σ1 − σn)/(σ1 − σ3): the light end marks the planes nearest to opening, the likely water paths.",
+			Figure:  a.stereonet(fo.with(plots.DilationTendency)), W: cm(0, 19), H: cm(0, 13.5)}},
+		{"mohr", plots.ReportFigure{
+			Title:   fmt.Sprintf("Mohr diagram of effective stress at %g m", z),
+			Caption: fmt.Sprintf("The three effective Mohr circles at %g m and every plane at that depth by its orientation (planes with their own pore pressure keep its excess over the water model). Red lines are the strength envelopes in use. The arrow shows the change in pore pressure that brings the most critical plane (opening planes aside) to its envelope. Both axes have the same scale.", z),
+			Figure:  a.mohr(fo), W: cm(0, 17), H: cm(0, 12)}},
+	}
+}
+
+func traceNote(a *assessment) string {
+	n := 0
+	for i := range a.planes {
+		if a.traced(i, "unstable") {
+			n++
+		}
+	}
+	if n == 0 {
+		return "No plane is critical or opening, so no great circle is drawn."
+	}
+	return ""
+}
