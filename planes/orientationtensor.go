@@ -1,0 +1,91 @@
+package planes
+
+import (
+	"math"
+
+	"cleft/insitu"
+
+	"gonum.org/v1/gonum/mat"
+	"gonum.org/v1/gonum/spatial/r3"
+)
+
+// Eigen is the eigen-decomposition of a normalised orientation tensor:
+// Values S1 ≥ S2 ≥ S3 summing to 1, and their unit axes.
+type Eigen struct {
+	Values [3]float64
+	Axes   [3]r3.Vec
+}
+
+// OrientationTensor returns the normalised orientation matrix of a set of
+// axes (Scheidegger 1965; Woodcock 1977),
+//
+//	T = Σ wᵢ nᵢnᵢᵀ / Σ wᵢ
+//
+// and its eigenvalues and eigenvectors. It treats n and −n alike, so it needs
+// no flipping to a common hemisphere. weights may be nil (all 1); a reading
+// of weight 0 counts for nothing. It panics if the lengths differ and
+// returns NaN values when the total weight is 0.
+func OrientationTensor(normals []r3.Vec, weights []float64) Eigen {
+	if weights != nil && len(weights) != len(normals) {
+		panic("planes: OrientationTensor with different numbers of normals and weights")
+	}
+	var t [6]float64 // xx yy zz xy xz yz
+	sw := 0.0
+	for i, n := range normals {
+		w := 1.0
+		if weights != nil {
+			w = weights[i]
+		}
+		n = r3.Unit(n)
+		t[0] += w * n.X * n.X
+		t[1] += w * n.Y * n.Y
+		t[2] += w * n.Z * n.Z
+		t[3] += w * n.X * n.Y
+		t[4] += w * n.X * n.Z
+		t[5] += w * n.Y * n.Z
+		sw += w
+	}
+	if sw == 0 {
+		nan := math.NaN()
+		return Eigen{Values: [3]float64{nan, nan, nan}}
+	}
+	for i := range t {
+		t[i] /= sw
+	}
+	var e mat.EigenSym
+	if !e.Factorize(mat.NewSymDense(3, []float64{t[0], t[3], t[4], t[3], t[1], t[5], t[4], t[5], t[2]}), true) {
+		panic("planes: eigen decomposition of an orientation tensor failed")
+	}
+	vals := e.Values(nil)
+	var vecs mat.Dense
+	e.VectorsTo(&vecs)
+	var out Eigen
+	for i := range 3 { // ascending from gonum, descending here
+		j := 2 - i
+		out.Values[i] = math.Max(0, vals[j])
+		out.Axes[i] = r3.Vec{X: vecs.At(0, j), Y: vecs.At(1, j), Z: vecs.At(2, j)}
+	}
+	return out
+}
+
+// Axis returns eigenvector i as a lower-hemisphere line.
+func (e Eigen) Axis(i int) insitu.Line { return insitu.LineOf(e.Axes[i]) }
+
+// WoodcockK returns Woodcock's (1977) shape parameter K = ln(S1/S2)/ln(S2/S3):
+// K > 1 for clusters, K < 1 for girdles. It is NaN when S2 = S3 (a perfect
+// cluster has 0/0) and 0 for a perfect girdle (S1 = S2, S3 = 0).
+func (e Eigen) WoodcockK() float64 {
+	s1, s2, s3 := e.Values[0], e.Values[1], e.Values[2]
+	num := math.Log(s1 / s2)
+	den := math.Log(s2 / s3)
+	if math.IsInf(den, 1) && !math.IsInf(num, 0) {
+		return 0
+	}
+	return num / den
+}
+
+// WoodcockC returns Woodcock's (1977) strength parameter C = ln(S1/S3):
+// larger for more strongly preferred orientation; +Inf when S3 = 0.
+func (e Eigen) WoodcockC() float64 {
+	return math.Log(e.Values[0] / e.Values[2])
+}
