@@ -284,3 +284,30 @@ func TestKamb(t *testing.T) {
 		t.Errorf("mean density of a uniform scatter %vσ, want about 3σ", m)
 	}
 }
+
+func TestAnalyseSets(t *testing.T) {
+	rng := rand.New(rand.NewPCG(53, 54))
+	ps, _, means := threeSets(rng)
+	a := AnalyseSets(ps, nil, SetOptions{})
+	if !a.Auto || len(a.Sets) != 3 || len(a.Scores) != 7 {
+		t.Fatalf("auto: %d sets, scores %v", len(a.Sets), a.Scores)
+	}
+	total := a.Unassigned
+	for k, s := range a.Sets {
+		total += len(s.Members)
+		if d := insitu.AxialAngle(s.Raw.Mean, means[k]); d > 3 || d > 3*s.Raw.Alpha {
+			t.Errorf("set %d mean %.1f° from the truth (α95 %.1f°)", k+1, d, s.Raw.Alpha)
+		}
+		if s.Weighted.K != s.Raw.K || s.WeightedCount != float64(len(s.Members)) {
+			t.Errorf("set %d: unweighted data gave different weighted statistics", k+1)
+		}
+	}
+	if total != len(ps) {
+		t.Errorf("%d readings accounted for, want %d", total, len(ps))
+	}
+	for i, s := range a.Assign {
+		if s >= 0 && math.Abs(a.AngleToMean[i]-insitu.AxialAngle(ps[i], a.Sets[s].Raw.Mean)) > 1e-12 {
+			t.Fatalf("angle to mean of reading %d", i)
+		}
+	}
+}

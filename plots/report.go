@@ -31,6 +31,8 @@ type Report struct {
 	States    []DepthState
 	Planes    []ReportPlane // least to most stable
 	BySet     bool          // group the plane table by Set
+	Sets      []ReportSet // joint sets of the field readings, or none
+	SetNote   string      // how the sets were found
 	Figures   []ReportFigure
 	Criterion string // the site criterion in words
 	Caution   string
@@ -65,6 +67,18 @@ type ReportPlane struct {
 	Result      planes.Result
 }
 
+// ReportSet is one joint set: its statistics and the stress on its mean
+// plane.
+type ReportSet struct {
+	Name          string
+	Count         int
+	WeightedCount float64
+	Stats         planes.FisherStats
+	WoodcockK     float64
+	Depth         float64
+	Result        planes.Result
+}
+
 // ReportFigure is a figure drawn inline, with its caption.
 type ReportFigure struct {
 	Title   string
@@ -94,6 +108,8 @@ var reportTmpl = template.Must(template.New("report").Funcs(template.FuncMap{
 	"inc":    func(i int) int { return i + 1 },
 	"seq3":   func() []int { return []int{0, 1, 2} },
 	"rake":   fmtRake,
+	"plane":  func(f planes.FisherStats) string { return f.MeanPlane().String() },
+	"pole":   func(f planes.FisherStats) string { l := f.MeanPole(); return fmt.Sprintf("%03.0f/%02.0f", l.Trend, l.Plunge) },
 }).Parse(reportTemplate))
 
 // fmtNum formats with up to 4 significant decimals, "—" for NaN.

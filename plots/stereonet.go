@@ -163,9 +163,14 @@ func (s *Stereonet) Draw(c draw.Canvas) {
 }
 
 func (s *Stereonet) drawField(n net, lo, hi float64) {
-	f := s.Field
-	img := image.NewNRGBA(image.Rect(0, 0, f.N, f.N))
 	var ramp Ramp
+	drawRaster(n, s.Field, func(v float64) color.NRGBA { return pale(ramp.At(s.frac(v, lo, hi))) })
+}
+
+// drawRaster draws the values of f inside the primitive, coloured by clr
+// (NaN in the undefined grey), with an anti-aliased edge.
+func drawRaster(n net, f *Field, clr func(float64) color.NRGBA) {
+	img := image.NewNRGBA(image.Rect(0, 0, f.N, f.N))
 	px := 2 / float64(f.N-1) // node spacing in net units
 	for j := range f.N {
 		for i := range f.N {
@@ -175,13 +180,12 @@ func (s *Stereonet) drawField(n net, lo, hi float64) {
 			if alpha == 0 {
 				continue
 			}
-			v := f.Values[j*f.N+i]
-			clr := undefinedFill
-			if !math.IsNaN(v) {
-				clr = pale(ramp.At(s.frac(v, lo, hi)))
+			c := undefinedFill
+			if v := f.Values[j*f.N+i]; !math.IsNaN(v) {
+				c = clr(v)
 			}
-			clr.A = uint8(255 * alpha)
-			img.SetNRGBA(i, j, clr)
+			c.A = uint8(255 * alpha)
+			img.SetNRGBA(i, j, c)
 		}
 	}
 	half := vg.Length(1+px/2) * n.r

@@ -73,6 +73,9 @@ type assessment struct {
 	depths  []float64
 	states  []stressRow
 	inputs  []plots.InputFile // the input files with their SHA-256
+
+	grouping *grouping // the readings' sets, when the site has readings_file
+	sets     []setRow
 }
 
 func runAssess(o assessOptions, stdout io.Writer) error {
@@ -122,6 +125,12 @@ func runAssess(o assessOptions, stdout io.Writer) error {
 			}
 			wrote = append(wrote, path)
 		}
+	}
+	if a.grouping != nil {
+		if err := writeFile(filepath.Join(o.out, "sets.csv"), a.writeSets); err != nil {
+			return err
+		}
+		wrote = append(wrote, filepath.Join(o.out, "sets.csv"))
 	}
 	rep, err := a.report(o.example, figs)
 	if err != nil {
@@ -173,11 +182,16 @@ func assess(s *site.Site) (*assessment, error) {
 		a.planes = append(a.planes, p)
 		a.results = append(a.results, r)
 	}
-	if len(a.planes) == 0 {
-		return nil, &site.Error{File: s.File, Msg: "no planes to assess: the planes table has a header but no rows"}
-	}
 	if name, sum := ps.Table(); name != "" {
 		a.inputs = append(a.inputs, plots.InputFile{Name: name, SHA256: sum})
+	}
+	if s.ReadingsFile != "" {
+		if err := a.addReadings(); err != nil {
+			return nil, err
+		}
+	}
+	if len(a.planes) == 0 {
+		return nil, &site.Error{File: s.File, Msg: "no planes to assess: the tables have a header but no rows"}
 	}
 	a.depths = s.ReportDepths
 	if len(a.depths) == 0 {

@@ -22,7 +22,7 @@ func newExampleCmd() *cobra.Command {
 	c := &cobra.Command{
 		Use:   "example DIR",
 		Short: "Write the demo site file and its planes table to edit",
-		Long: `example writes DIR/site.yaml and DIR/planes.csv, the invented demo site
+		Long: `example writes DIR/site.yaml, DIR/planes.csv and DIR/readings.csv, the invented demo site
 that 'cleft assess --example' uses, as a starting point for your own site.
 It does not overwrite existing files unless --force is given.`,
 		Args: func(_ *cobra.Command, args []string) error {
@@ -41,7 +41,7 @@ It does not overwrite existing files unless --force is given.`,
 }
 
 func runExample(o exampleOptions, stdout io.Writer) error {
-	names := []string{demo.Site, "planes.csv"}
+	names := []string{demo.Site, "planes.csv", "readings.csv"}
 	if !o.force {
 		for _, n := range names {
 			p := filepath.Join(o.dir, n)

@@ -106,26 +106,30 @@ func TestAssessExample(t *testing.T) {
 	if code != 0 {
 		t.Fatalf("exit %d: %s", code, stderr)
 	}
-	for _, want := range []string{"39 planes were screened", "1 is critical", "1 is opening", "37 are stable", "The least stable are F2", "frictional-limit check", "not a substitute"} {
+	for _, want := range []string{"138 planes were screened", "1 is critical", "1 is opening", "136 are stable", "3 sets", "The least stable are F2", "frictional-limit check", "not a substitute"} {
 		if !strings.Contains(out, want) {
 			t.Errorf("summary lacks %q:\n%s", want, out)
 		}
 	}
 	rows := readCSV(t, filepath.Join(dir, "planes.csv"))
-	if len(rows) != 40 {
-		t.Errorf("planes.csv has %d lines, want header + 39", len(rows))
+	if len(rows) != 139 {
+		t.Errorf("planes.csv has %d lines, want header + 138 (5 planes, 133 readings)", len(rows))
 	}
 	var js []map[string]any
 	readJSON(t, filepath.Join(dir, "planes.json"), &js)
-	if len(js) != 39 {
-		t.Errorf("planes.json has %d rows, want 39", len(js))
+	if len(js) != 138 {
+		t.Errorf("planes.json has %d rows, want 138", len(js))
 	}
 	var st stressDoc
 	readJSON(t, filepath.Join(dir, "stress.json"), &st)
 	if len(st.States) != 3 || float64(st.States[2].Depth) != 200 {
 		t.Errorf("stress.json states %+v, want the report depths 50, 120, 200", st.States)
 	}
-	for _, name := range []string{"planes.csv", "planes.json", "stress.json"} {
+	sets := readCSV(t, filepath.Join(dir, "sets.csv"))
+	if len(sets) != 5 || sets[1][0] != "S1" || sets[4][0] != "unassigned" {
+		t.Errorf("sets.csv: %v", sets)
+	}
+	for _, name := range []string{"planes.csv", "planes.json", "stress.json", "sets.csv"} {
 		data, _ := os.ReadFile(filepath.Join(dir, name))
 		for _, bad := range []string{"NaN", "Inf"} {
 			if bytes.Contains(data, []byte(bad)) {

@@ -2,6 +2,7 @@ package main
 
 import (
 	"bufio"
+	"encoding/csv"
 	"fmt"
 	"io"
 	"os"
@@ -47,4 +48,13 @@ func unwrapPath(err error) error {
 		return pe.Err
 	}
 	return err
+}
+
+// writeCSV writes rows with encoding/csv.
+func writeCSV(w io.Writer, rows [][]string) error {
+	cw := csv.NewWriter(w)
+	if err := cw.WriteAll(rows); err != nil {
+		return err
+	}
+	return cw.Error()
 }

@@ -65,6 +65,13 @@ func (a *assessment) report(example bool, figs []namedFigure) (*plots.Report, er
 	for _, f := range figs {
 		r.Figures = append(r.Figures, f.ReportFigure)
 	}
+	if g := a.grouping; g != nil {
+		r.SetNote = g.explain()
+		for _, st := range a.sets {
+			r.Sets = append(r.Sets, plots.ReportSet{Name: st.name, Count: len(st.set.Members), WeightedCount: st.set.WeightedCount,
+				Stats: st.set.Raw, WoodcockK: st.set.Tensor.WoodcockK(), Depth: st.plane.Depth, Result: st.result})
+		}
+	}
 	return r, nil
 }
 
@@ -80,7 +87,7 @@ type namedFigure struct {
 func (a *assessment) figures() []namedFigure {
 	fo := figureOptions{depth: math.NaN(), proj: plots.EqualArea, traces: "unstable"}
 	z := a.figureDepth()
-	return []namedFigure{
+	figs := []namedFigure{
 		{"stereonet-slip", plots.ReportFigure{
 			Title: fmt.Sprintf("Slip tendency of every plane, and of every orientation at %g m", z),
 			Caption: fmt.Sprintf("Lower-hemisphere equal-area net of poles to planes. Each pole is coloured by the plane's own slip tendency Ts = τ/σn' at its own depth and shaped by its state (circle stable, triangle critical, square with a cross opening). The paler background is Ts for every orientation at %g m with the site's water model and strength; thin lines are its contours, the dark red line (if any) is where the factor of safety is 1 and orientations past it would slip. Black symbols are the principal stress axes; great circles are drawn for the critical and opening planes. %s",
@@ -95,6 +102,13 @@ func (a *assessment) figures() []namedFigure {
 			Caption: fmt.Sprintf("The three effective Mohr circles at %g m and every plane at that depth by its orientation (planes with their own pore pressure keep its excess over the water model). Red lines are the strength envelopes in use. The arrow shows the change in pore pressure that brings the most critical plane (opening planes aside) to its envelope. Both axes have the same scale.", z),
 			Figure:  a.mohr(fo), W: cm(0, 17), H: cm(0, 12)}},
 	}
+	if g := a.grouping; g != nil {
+		figs = append(figs, namedFigure{"sets-density", plots.ReportFigure{
+			Title:   fmt.Sprintf("Pole density of the %d field readings and their %d sets", len(g.readings), len(g.an.Sets)),
+			Caption: "Kamb (1959) counting of the poles (weighted where the readings are), in multiples of σ: a uniform scatter reads 3σ. Dots are poles of readings in a set, rings unassigned readings; each set mean is shown with its 95 % confidence cone (α95, Fisher 1953). " + g.explain(),
+			Figure:  g.densityNet(a.site.Name, plots.EqualArea), W: cm(0, 19), H: cm(0, 13.5)}})
+	}
+	return figs
 }
 
 func traceNote(a *assessment) string {

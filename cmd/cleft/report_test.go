@@ -96,8 +96,8 @@ func TestReportStructure(t *testing.T) {
 			}
 		}
 	})
-	if rows != 39 {
-		t.Errorf("%d plane rows, want 39", rows)
+	if rows != 138+3 {
+		t.Errorf("%d plane and set rows, want 138 planes + 3 sets", rows)
 	}
 	figs, svgs := 0, 0
 	walk(doc, func(n *html.Node) {
@@ -120,8 +120,8 @@ func TestReportStructure(t *testing.T) {
 			}
 		}
 	})
-	if figs != 3 || svgs != 3 {
-		t.Errorf("%d figures, %d inline SVGs; want 3 and 3", figs, svgs)
+	if figs != 4 || svgs != 4 {
+		t.Errorf("%d figures, %d inline SVGs; want 4 and 4", figs, svgs)
 	}
 	data, _ := os.ReadFile(filepath.Join(dir, "report.html"))
 	for _, bad := range []string{"http://", "https://", "@import", "url("} {
@@ -130,7 +130,7 @@ func TestReportStructure(t *testing.T) {
 		}
 	}
 	h := text(byID(doc, "header"))
-	for _, want := range []string{"cleft " + version, "2026-12-01 09:30 UTC", "site.yaml", "planes.csv", "SHA-256", "not a substitute"} {
+	for _, want := range []string{"cleft " + version, "2026-12-01 09:30 UTC", "site.yaml", "planes.csv", "readings.csv", "SHA-256", "not a substitute"} {
 		if !strings.Contains(h, want) {
 			t.Errorf("header lacks %q", want)
 		}
@@ -165,7 +165,7 @@ func TestReportSummaryGolden(t *testing.T) {
 	}
 	var f summaryFacts
 	readJSON(t, filepath.Join(dir, "summary.json"), &f) // fails on invalid JSON
-	if f.Planes != 39 || f.Critical != 1 || f.Opening != 1 || len(f.LeastStable) != 3 || f.LeastStable[0].Name != "F2" || len(f.Limit.ExceededAt) != 0 {
+	if f.Planes != 138 || f.Critical != 1 || f.Opening != 1 || len(f.LeastStable) != 3 || f.LeastStable[0].Name != "F2" || len(f.Limit.ExceededAt) != 0 || len(f.Sets) != 3 || f.Readings != 133 {
 		t.Errorf("summary.json = %+v", f)
 	}
 }

@@ -76,6 +76,7 @@ below ground; angles in degrees, azimuths clockwise from north.
 		newStressCmd(),
 		newAssessCmd(),
 		newPlotCmd(),
+		newSetsCmd(),
 		newExampleCmd(),
 	)
 	root.CompletionOptions.DisableDefaultCmd = true

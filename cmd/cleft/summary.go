@@ -3,6 +3,7 @@ package main
 import (
 	"fmt"
 	"math"
+	"sort"
 	"strings"
 
 	"cleft/planes"
@@ -20,6 +21,10 @@ type summaryFacts struct {
 	DepthMax    num          `json:"depth_max_m"`
 	LeastStable []leastPlane `json:"least_stable"`
 	Limit       limitFacts   `json:"frictional_limit"`
+	// Sets are the joint sets of the field readings, least stable first;
+	// empty without readings_file.
+	Readings int          `json:"readings"`
+	Sets     []leastPlane `json:"sets"`
 }
 
 type leastPlane struct {
@@ -63,6 +68,20 @@ func (a *assessment) facts() summaryFacts {
 		f.LeastStable = append(f.LeastStable, leastPlane{Name: p.Name, Dip: num(p.Orientation.Dip), DipDirection: num(p.Orientation.DipDirection),
 			Depth: num(p.Depth), State: r.State.String(), EffectiveNormal: num(r.EffectiveNormal), FactorOfSafety: num(r.FactorOfSafety), PressureToSlip: num(r.PressureToSlip)})
 	}
+	if a.grouping != nil {
+		f.Readings = len(a.grouping.readings)
+		idx := make([]int, len(a.sets))
+		for i := range idx {
+			idx[i] = i
+		}
+		sort.SliceStable(idx, func(i, j int) bool { return planes.LessStable(a.sets[idx[i]].result, a.sets[idx[j]].result) })
+		for _, i := range idx {
+			st := a.sets[i]
+			f.Sets = append(f.Sets, leastPlane{Name: st.name, Dip: num(st.plane.Orientation.Dip), DipDirection: num(st.plane.Orientation.DipDirection),
+				Depth: num(st.plane.Depth), State: st.result.State.String(), EffectiveNormal: num(st.result.EffectiveNormal),
+				FactorOfSafety: num(st.result.FactorOfSafety), PressureToSlip: num(st.result.PressureToSlip)})
+		}
+	}
 	f.Limit = limitFacts{Friction: a.states[0].Friction, Limit: a.states[0].Limit, Depths: a.depths, LargestRatio: num(math.Inf(-1)), ExceededAt: []float64{}}
 	for _, st := range a.states {
 		if r := float64(st.Ratio); r > float64(f.Limit.LargestRatio) {
@@ -87,17 +106,7 @@ func (f summaryFacts) sentences() []string {
 		plural(f.Planes, "plane was", "planes were"), depths, isAre(f.Critical), isAre(f.Opening), isAre(f.Stable)))
 	var parts []string
 	for _, p := range f.LeastStable {
-		where := fmt.Sprintf("%s (%02.0f/%03.0f at %g m)", p.Name, float64(p.Dip), float64(p.DipDirection), float64(p.Depth))
-		switch {
-		case p.State == "opening":
-			parts = append(parts, fmt.Sprintf("%s, opening, with an effective normal stress of %s MPa", where, signed(float64(p.EffectiveNormal))))
-		case float64(p.PressureToSlip) < 0:
-			parts = append(parts, fmt.Sprintf("%s, %s with a factor of safety of %.2f, already %.2f MPa of pore pressure past its strength", where, p.State, float64(p.FactorOfSafety), -float64(p.PressureToSlip)))
-		case math.IsNaN(float64(p.FactorOfSafety)):
-			parts = append(parts, fmt.Sprintf("%s, carrying no shear stress", where))
-		default:
-			parts = append(parts, fmt.Sprintf("%s, factor of safety %.2f, which would slip after a %.2f MPa rise in pore pressure", where, float64(p.FactorOfSafety), float64(p.PressureToSlip)))
-		}
+		parts = append(parts, p.describe())
 	}
 	lead := "The least stable is "
 	if len(parts) > 1 {
@@ -105,6 +114,15 @@ func (f summaryFacts) sentences() []string {
 		parts[len(parts)-1] = "and " + parts[len(parts)-1]
 	}
 	out = append(out, lead+strings.Join(parts, "; ")+".")
+	if len(f.Sets) > 0 {
+		var means []string
+		for _, p := range f.Sets {
+			means = append(means, fmt.Sprintf("%s %02.0f/%03.0f", p.Name, float64(p.Dip), float64(p.DipDirection)))
+		}
+		sort.Strings(means)
+		out = append(out, fmt.Sprintf("The %d field readings form %s (%s); the least stable set mean is %s.",
+			f.Readings, plural(len(f.Sets), "set", "sets"), strings.Join(means, ", "), f.Sets[0].describe()))
+	}
 	l := f.Limit
 	ds := joinDepths(l.Depths)
 	if len(l.ExceededAt) == 0 {
@@ -115,6 +133,20 @@ func (f summaryFacts) sentences() []string {
 			float64(l.Limit), float64(l.Friction), joinDepths(l.ExceededAt)))
 	}
 	return out
+}
+
+// describe puts one plane's stability in words.
+func (p leastPlane) describe() string {
+	where := fmt.Sprintf("%s (%02.0f/%03.0f at %g m)", p.Name, float64(p.Dip), float64(p.DipDirection), float64(p.Depth))
+	switch {
+	case p.State == "opening":
+		return fmt.Sprintf("%s, opening, with an effective normal stress of %s MPa", where, signed(float64(p.EffectiveNormal)))
+	case float64(p.PressureToSlip) < 0:
+		return fmt.Sprintf("%s, %s with a factor of safety of %.2f, already %.2f MPa of pore pressure past its strength", where, p.State, float64(p.FactorOfSafety), -float64(p.PressureToSlip))
+	case math.IsNaN(float64(p.FactorOfSafety)):
+		return fmt.Sprintf("%s, carrying no shear stress", where)
+	}
+	return fmt.Sprintf("%s, factor of safety %.2f, which would slip after a %.2f MPa rise in pore pressure", where, float64(p.FactorOfSafety), float64(p.PressureToSlip))
 }
 
 // signed formats v to two decimals with a true minus sign.

@@ -18,6 +18,7 @@ type Plane struct {
 	Friction     float64 // μ, overrides the site's
 	Cohesion     float64 // MPa, overrides the site's
 	PorePressure float64 // MPa, overrides the water model
+	Weight       float64 // readings only: the reading's own weight, > 0
 	// Extras are the values of the input's extra columns, in ExtraNames order.
 	Extras []string
 }
@@ -32,16 +33,21 @@ const (
 	colFriction
 	colCohesion
 	colPorePressure
+	colWeight // readings only
 	nCols
 )
 
-var colNames = [nCols]string{"name", "dip", "dip_direction", "strike", "depth", "friction", "cohesion", "pore_pressure"}
+var colNames = [nCols]string{"name", "dip", "dip_direction", "strike", "depth", "friction", "cohesion", "pore_pressure", "weight"}
 
 // planeDefaults are what a plane falls back on.
 type planeDefaults struct {
 	depth    float64
 	hasDepth bool
 	coulomb  bool // the site criterion is Coulomb (cohesion alone may override it)
+	// readings: a table of field readings, where name and depth may be left
+	// out (a reading is then named R and its line, its depth is NaN) and a
+	// weight column is known.
+	readings bool
 }
 
 func (s *Site) planeDefaults() planeDefaults {
@@ -54,7 +60,7 @@ func (s *Site) planeDefaults() planeDefaults {
 func parsePlane(vals *[nCols]string, present *[nCols]bool, d planeDefaults, errAt func(col int, format string, a ...any) error) (Plane, error) {
 	var p Plane
 	p.Name = strings.TrimSpace(vals[colName])
-	if p.Name == "" {
+	if p.Name == "" && !d.readings {
 		return p, errAt(colName, "empty name: every plane needs one")
 	}
 	num := func(col int) (float64, bool, error) {
@@ -71,6 +77,8 @@ func parsePlane(vals *[nCols]string, present *[nCols]bool, d planeDefaults, errA
 		}
 		return v, true, nil
 	}
+	var ok bool
+	var err error
 	dip, ok, err := num(colDip)
 	if err != nil {
 		return p, err
@@ -115,8 +123,15 @@ func parsePlane(vals *[nCols]string, present *[nCols]bool, d planeDefaults, errA
 		p.Depth = z
 	case d.hasDepth:
 		p.Depth = d.depth
+	case d.readings:
+		p.Depth = math.NaN()
 	default:
 		return p, errAt(colDepth, "no depth for this plane and no depth: in the site file")
+	}
+	if p.Weight, ok, err = num(colWeight); err != nil {
+		return p, err
+	} else if ok && !(p.Weight > 0) {
+		return p, errAt(colWeight, "%s: a weight must be > 0", fmtNum(p.Weight))
 	}
 	if p.Friction, ok, err = num(colFriction); err != nil {
 		return p, err
@@ -160,7 +175,7 @@ func (s *Site) CriterionFor(p *Plane, scratch *planes.Coulomb) planes.Criterion 
 	return scratch
 }
 
-var inlineKeys = append(colNames[:], "set")
+var inlineKeys = append(colNames[:colWeight:colWeight], "set")
 
 func (s *Site) readInlinePlanes(v node) error {
 	items, err := v.list()

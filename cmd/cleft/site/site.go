@@ -9,7 +9,6 @@ import (
 	"io"
 	"io/fs"
 	"os"
-	"path/filepath"
 	"strconv"
 	"strings"
 
@@ -39,6 +38,11 @@ type Site struct {
 	// PlanesFile is the planes_file path resolved against the site file's
 	// folder, or "".
 	PlanesFile string
+	// ReadingsFile is the readings_file path (field readings to group into
+	// sets) resolved likewise, or "".
+	ReadingsFile string
+	// Sets is how the readings are grouped (the sets: block, or defaults).
+	Sets SetsConfig
 
 	// ReportDepths are the depths of report.depths, or nil.
 	ReportDepths []float64
@@ -159,7 +163,7 @@ var parserProblems = []string{
 	"found duplicate %TAG directive",
 }
 
-var topKeys = []string{"site", "depth", "stress", "water", "strength", "planes", "planes_file", "report"}
+var topKeys = []string{"site", "depth", "stress", "water", "strength", "planes", "planes_file", "readings_file", "sets", "report"}
 
 func (s *Site) read(root node) error {
 	f, err := root.mapping(topKeys...)
@@ -208,10 +212,26 @@ func (s *Site) read(root node) error {
 		if strings.TrimSpace(p) == "" {
 			return pv.errf("empty path")
 		}
-		if !filepath.IsAbs(p) {
-			p = filepath.Join(filepath.Dir(s.File), p)
+		s.PlanesFile = resolvePath(s.File, p)
+	}
+	s.Sets = DefaultSets
+	if rv, ok := f.get("readings_file"); ok {
+		p, err := rv.text()
+		if err != nil {
+			return err
 		}
-		s.PlanesFile = p
+		if strings.TrimSpace(p) == "" {
+			return rv.errf("empty path")
+		}
+		s.ReadingsFile = resolvePath(s.File, p)
+	}
+	if sv, ok := f.get("sets"); ok {
+		if s.ReadingsFile == "" {
+			return sv.errf("sets: goes with readings_file: (the field readings to group)")
+		}
+		if err := s.readSets(sv); err != nil {
+			return err
+		}
 	}
 	if rv, ok := f.get("report"); ok {
 		if err := s.readReport(rv); err != nil {

@@ -24,6 +24,7 @@ type PlaneReader struct {
 	idx        [nCols]int // column index, −1 when absent
 	extra      []int      // indexes of the extra columns
 	ExtraNames []string
+	width      int // number of header columns
 	defaults   planeDefaults
 	vals       [nCols]string
 	present    [nCols]bool
@@ -35,6 +36,7 @@ func NewPlaneReader(r io.Reader, file string, d planeDefaults) (*PlaneReader, er
 	cr.ReuseRecord = true
 	cr.TrimLeadingSpace = true
 	cr.Comment = '#'
+	cr.FieldsPerRecord = -1 // checked in Next, to say how many were found
 	pr := &PlaneReader{file: file, r: cr, defaults: d}
 	head, err := cr.Read()
 	if errors.Is(err, io.EOF) {
@@ -44,6 +46,7 @@ func NewPlaneReader(r io.Reader, file string, d planeDefaults) (*PlaneReader, er
 		return nil, pr.csvError(err)
 	}
 	line, _ := cr.FieldPos(0)
+	pr.width = len(head)
 	for i := range pr.idx {
 		pr.idx[i] = -1
 	}
@@ -59,6 +62,9 @@ func NewPlaneReader(r io.Reader, file string, d planeDefaults) (*PlaneReader, er
 		seen[h] = true
 		known := false
 		for c, name := range colNames {
+			if c == colWeight && !d.readings {
+				continue // a planes table carries a weight column through
+			}
 			if h == name {
 				pr.idx[c] = i
 				known = true
@@ -76,7 +82,7 @@ func NewPlaneReader(r io.Reader, file string, d planeDefaults) (*PlaneReader, er
 		return &Error{File: file, Line: line, Msg: fmt.Sprintf("the header has no %q column%s; it has: %s", colNames[c], why, strings.Join(head, ", "))}
 	}
 	switch {
-	case !pr.present[colName]:
+	case !pr.present[colName] && !d.readings:
 		return nil, need(colName, "")
 	case !pr.present[colDip]:
 		return nil, need(colDip, "")
@@ -84,7 +90,7 @@ func NewPlaneReader(r io.Reader, file string, d planeDefaults) (*PlaneReader, er
 		return nil, &Error{File: file, Line: line, Msg: "the header has both strike and dip_direction: give one of the two"}
 	case !pr.present[colStrike] && !pr.present[colDipDirection]:
 		return nil, need(colDipDirection, " (or strike, right-hand rule)")
-	case !pr.present[colDepth] && !d.hasDepth:
+	case !pr.present[colDepth] && !d.hasDepth && !d.readings:
 		return nil, need(colDepth, " and the site file gives no depth:")
 	}
 	return pr, nil
@@ -93,11 +99,7 @@ func NewPlaneReader(r io.Reader, file string, d planeDefaults) (*PlaneReader, er
 func (pr *PlaneReader) csvError(err error) error {
 	var pe *csv.ParseError
 	if errors.As(err, &pe) {
-		msg := pe.Err.Error()
-		if errors.Is(pe.Err, csv.ErrFieldCount) {
-			msg = fmt.Sprintf("this row has a different number of fields from the header (column %d): every row needs one value per header column", pe.Column)
-		}
-		return &Error{File: pr.file, Line: pe.Line, Msg: msg}
+		return &Error{File: pr.file, Line: pe.Line, Msg: "not valid CSV: " + pe.Err.Error()}
 	}
 	return &Error{File: pr.file, Msg: err.Error()}
 }
@@ -113,6 +115,9 @@ func (pr *PlaneReader) Next(p *Plane) error {
 		return pr.csvError(err)
 	}
 	line, _ := pr.r.FieldPos(0)
+	if len(rec) != pr.width {
+		return &Error{File: pr.file, Line: line, Msg: fmt.Sprintf("this row has %d values and the header %d columns: every row needs one value per column (quote values that contain commas)", len(rec), pr.width)}
+	}
 	for c, i := range pr.idx {
 		if i >= 0 {
 			pr.vals[c] = rec[i]
@@ -131,6 +136,9 @@ func (pr *PlaneReader) Next(p *Plane) error {
 	*p = q
 	p.Line = line
 	p.Extras = extras
+	if p.Name == "" {
+		p.Name = fmt.Sprintf("R%d", line)
+	}
 	return nil
 }
 
@@ -140,7 +148,7 @@ func (pr *PlaneReader) Next(p *Plane) error {
 type PlaneStream struct {
 	ExtraNames []string
 	tableName  string
-	hash       hash.Hash // of the table's bytes as read
+	hash       *hasher // of the table's bytes as read
 	inline     []Plane
 	next       int
 	table      *PlaneReader
@@ -173,12 +181,12 @@ func (s *Site) OpenPlanes(table string, stdin io.Reader) (*PlaneStream, error) {
 			}
 			r, ps.closer, name = f, f, s.PlanesFile
 		}
-		if r == nil && len(s.Planes) == 0 {
+		if r == nil && len(s.Planes) == 0 && s.ReadingsFile == "" {
 			return nil, &Error{File: s.File, Msg: "no planes: give planes: or planes_file: in the site file, or --planes FILE.csv"}
 		}
 	}
 	if r != nil {
-		ps.tableName, ps.hash = name, sha256.New()
+		ps.tableName, ps.hash = name, newHash()
 		r = io.TeeReader(r, ps.hash)
 		t, err := NewPlaneReader(r, name, s.planeDefaults())
 		if err != nil {
@@ -210,7 +218,7 @@ func (ps *PlaneStream) Table() (name, sum string) {
 	if ps.hash == nil {
 		return "", ""
 	}
-	return ps.tableName, hex.EncodeToString(ps.hash.Sum(nil))
+	return ps.tableName, ps.hash.sum()
 }
 
 // Next reads the next plane into p; io.EOF after the last.
@@ -255,3 +263,10 @@ func (ps *PlaneStream) Close() error {
 	}
 	return nil
 }
+
+// hasher is a SHA-256 of what was written to it.
+type hasher struct{ h hash.Hash }
+
+func newHash() *hasher                        { return &hasher{sha256.New()} }
+func (h *hasher) Write(p []byte) (int, error) { return h.h.Write(p) }
+func (h *hasher) sum() string                 { return hex.EncodeToString(h.h.Sum(nil)) }

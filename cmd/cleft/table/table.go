@@ -149,6 +149,10 @@ func value(b []byte, f Format, s string, null bool) []byte {
 	return appendCSV(b, s)
 }
 
+// AppendNumber appends v as the tables write numbers: 8 significant
+// digits, nothing for NaN or ±Inf, 0 for −0.
+func AppendNumber(b []byte, v float64) []byte { return appendNumber(b, v) }
+
 func appendNumber(b []byte, v float64) []byte {
 	if math.IsNaN(v) || math.IsInf(v, 0) {
 		return b

@@ -1,0 +1,156 @@
+package site
+
+import (
+	"errors"
+	"fmt"
+	"io"
+	"math"
+	"os"
+	"path/filepath"
+	"strconv"
+	"strings"
+
+	"cleft/insitu"
+	"cleft/planes"
+)
+
+// SetsConfig is how field readings are turned into sets: the site file's
+// sets: block, or the flags of cleft sets.
+type SetsConfig struct {
+	Count     int                  // number of sets; 0 with no Seeds: automatic
+	Seeds     []planes.Orientation // starting set means
+	MaxAngle  float64              // cut-off cone, degrees; 0 for none
+	Line      *insitu.Line         // sampling line for Terzaghi weights, or nil
+	MaxWeight float64              // cap of the Terzaghi weight
+}
+
+// DefaultSets is automatic choice, no cut-off, no sampling line.
+var DefaultSets = SetsConfig{MaxWeight: planes.DefaultMaxWeight}
+
+// ParseLine reads "TREND/PLUNGE", e.g. "120/10".
+func ParseLine(s string) (insitu.Line, error) {
+	a, b, ok := strings.Cut(s, "/")
+	t, err1 := strconv.ParseFloat(strings.TrimSpace(a), 64)
+	p, err2 := strconv.ParseFloat(strings.TrimSpace(b), 64)
+	switch {
+	case !ok || err1 != nil || err2 != nil:
+		return insitu.Line{}, fmt.Errorf("%q: want TREND/PLUNGE in degrees, e.g. 120/10", s)
+	case !(t >= 0 && t <= 360) || !(p >= 0 && p <= 90):
+		return insitu.Line{}, fmt.Errorf("%q: trend must be in [0, 360] and plunge in [0, 90]", s)
+	}
+	return insitu.Line{Trend: insitu.Azimuth(t), Plunge: p}, nil
+}
+
+func (s *Site) readSets(v node) error {
+	m, err := v.mapping("count", "seeds", "max_angle", "line", "max_weight")
+	if err != nil {
+		return err
+	}
+	c := DefaultSets
+	if cv, ok := m.get("count"); ok {
+		n, err := cv.numberIn(interval{lo: 1, hi: 12})
+		if err != nil {
+			return err
+		}
+		if n != math.Trunc(n) {
+			return cv.errf("%v: want a whole number of sets", n)
+		}
+		c.Count = int(n)
+	}
+	if sv, ok := m.get("seeds"); ok {
+		items, err := sv.list()
+		if err != nil {
+			return err
+		}
+		for _, it := range items {
+			t, err := it.text()
+			if err != nil {
+				return err
+			}
+			o, err := planes.Parse(t)
+			if err != nil {
+				return it.errf("%v", err)
+			}
+			c.Seeds = append(c.Seeds, o)
+		}
+		if c.Count != 0 && c.Count != len(c.Seeds) {
+			return sv.errf("%d seeds for count: %d: give one seed per set, or leave count out", len(c.Seeds), c.Count)
+		}
+	}
+	if c.MaxAngle, _, err = m.optNumber("max_angle", interval{lo: 0, hi: 90, openLo: true, unit: "°"}, 0); err != nil {
+		return err
+	}
+	if lv, ok := m.get("line"); ok {
+		t, err := lv.text()
+		if err != nil {
+			return err
+		}
+		l, err := ParseLine(t)
+		if err != nil {
+			return lv.errf("%v", err)
+		}
+		c.Line = &l
+	}
+	if c.MaxWeight, _, err = m.optNumber("max_weight", interval{lo: 1, hi: 1000}, planes.DefaultMaxWeight); err != nil {
+		return err
+	}
+	s.Sets = c
+	return nil
+}
+
+// ReadReadings reads a whole table of field readings (see PlaneReader: name
+// and depth may be left out, a weight column is known). A reading without a
+// depth takes depth, when hasDepth, else NaN. It returns the readings, the
+// names of the extra columns and the SHA-256 of the table.
+func ReadReadings(r io.Reader, name string, depth float64, hasDepth bool) ([]Plane, []string, string, error) {
+	h := newHash()
+	rd, err := NewPlaneReader(io.TeeReader(r, h), name, planeDefaults{depth: depth, hasDepth: hasDepth, coulomb: true, readings: true})
+	if err != nil {
+		return nil, nil, "", err
+	}
+	var out []Plane
+	for {
+		var p Plane
+		if err := rd.Next(&p); err != nil {
+			if errors.Is(err, io.EOF) {
+				break
+			}
+			return nil, nil, "", err
+		}
+		out = append(out, p)
+	}
+	if len(out) == 0 {
+		return nil, nil, "", &Error{File: name, Msg: "no readings: the table has a header but no rows"}
+	}
+	return out, rd.ExtraNames, h.sum(), nil
+}
+
+// OpenReadings reads the site's readings_file.
+func (s *Site) OpenReadings() ([]Plane, []string, string, error) {
+	f, err := s.open(s.ReadingsFile)
+	if err != nil {
+		return nil, nil, "", fmt.Errorf("%s: readings_file %s: cannot open it: %w", s.File, s.ReadingsFile, unwrapPath(err))
+	}
+	defer f.Close()
+	return ReadReadings(f, s.ReadingsFile, s.Depth, s.HasDepth)
+}
+
+// LoadReadings reads a readings table from a path ("-" for stdin).
+func LoadReadings(path string, stdin io.Reader) ([]Plane, []string, string, error) {
+	if path == "-" {
+		return ReadReadings(stdin, "standard input", 0, false)
+	}
+	f, err := os.Open(path)
+	if err != nil {
+		return nil, nil, "", fmt.Errorf("%s: cannot open the readings table: %w", path, unwrapPath(err))
+	}
+	defer f.Close()
+	return ReadReadings(f, path, 0, false)
+}
+
+func resolvePath(siteFile, p string) string {
+	if filepath.IsAbs(p) {
+		return p
+	}
+	return filepath.Join(filepath.Dir(siteFile), p)
+}

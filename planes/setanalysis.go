@@ -1,0 +1,128 @@
+package planes
+
+import (
+	"math"
+
+	"cleft/insitu"
+
+	"gonum.org/v1/gonum/spatial/r3"
+)
+
+// SetOptions say how AnalyseSets finds the sets.
+type SetOptions struct {
+	K        int      // number of sets; 0 with no Seeds chooses automatically
+	Seeds    []r3.Vec // starting set axes (poles); fixes the number of sets
+	MaxAngle float64  // cut-off cone, degrees; 0 for none
+	KMax     int      // largest number tried by the automatic choice (default 6)
+}
+
+// Set is one joint set with its statistics.
+type Set struct {
+	Members       []int   // indexes of its readings
+	WeightedCount float64 // Σ of the members' weights
+	Raw           FisherStats
+	Weighted      FisherStats // with the weights (equal to Raw without them)
+	Tensor        Eigen       // of the members, weighted
+}
+
+// Mean returns the set's mean plane (from the raw Fisher mean).
+func (s Set) Mean() Orientation { return s.Raw.MeanPlane() }
+
+// SetAnalysis is readings grouped into sets with statistics per set.
+type SetAnalysis struct {
+	Sets   []Set
+	Assign []int // set of each reading, or −1
+	// AngleToMean is each reading's angle (degrees, axial) to its set's mean
+	// pole, or to the nearest set mean for an unassigned reading.
+	AngleToMean      []float64
+	Unassigned       int
+	UnassignedWeight float64
+	// Auto is true when the number of sets was chosen by ChooseK; Scores
+	// then holds the mean silhouette width for each number tried.
+	Auto   bool
+	Scores []float64
+}
+
+// AnalyseSets groups the poles into sets (Cluster, with ChooseK when
+// neither K nor seeds are given) and computes each set's Fisher statistics,
+// raw and weighted, and its orientation tensor. weights may be nil.
+func AnalyseSets(poles []r3.Vec, weights []float64, o SetOptions) SetAnalysis {
+	var a SetAnalysis
+	co := ClusterOptions{K: o.K, Seeds: o.Seeds, MaxAngle: o.MaxAngle, Weights: weights}
+	if o.K == 0 && len(o.Seeds) == 0 {
+		kmax := o.KMax
+		if kmax == 0 {
+			kmax = 6
+		}
+		// The number of sets is chosen without the cut-off cone: a cone
+		// leaves out the readings that do not fit, which flatters a
+		// grouping with too few sets.
+		choose := co
+		choose.MaxAngle = 0
+		co.K, a.Scores = ChooseK(poles, choose, kmax)
+		a.Auto = true
+	}
+	co.K = min(max(co.K, 1), len(poles))
+	c := Cluster(poles, co)
+	a.Assign = c.Assign
+	w := func(i int) float64 {
+		if weights == nil {
+			return 1
+		}
+		return weights[i]
+	}
+	a.Sets = make([]Set, len(c.Axes))
+	for i, s := range c.Assign {
+		if s < 0 {
+			a.Unassigned++
+			a.UnassignedWeight += w(i)
+			continue
+		}
+		a.Sets[s].Members = append(a.Sets[s].Members, i)
+		a.Sets[s].WeightedCount += w(i)
+	}
+	kept := a.Sets[:0]
+	remap := make([]int, len(a.Sets))
+	for k, s := range a.Sets {
+		if len(s.Members) == 0 { // a set the cut-off emptied
+			remap[k] = -1
+			continue
+		}
+		remap[k] = len(kept)
+		ps := make([]r3.Vec, len(s.Members))
+		var ws []float64
+		if weights != nil {
+			ws = make([]float64, len(s.Members))
+		}
+		for j, m := range s.Members {
+			ps[j] = poles[m]
+			if ws != nil {
+				ws[j] = weights[m]
+			}
+		}
+		s.Raw = Fisher(ps, nil)
+		s.Weighted = Fisher(ps, ws)
+		s.Tensor = OrientationTensor(ps, ws)
+		kept = append(kept, s)
+	}
+	a.Sets = kept
+	for i, s := range a.Assign {
+		if s >= 0 {
+			a.Assign[i] = remap[s]
+		}
+	}
+	a.AngleToMean = make([]float64, len(poles))
+	for i, p := range poles {
+		if s := a.Assign[i]; s >= 0 {
+			a.AngleToMean[i] = insitu.AxialAngle(p, a.Sets[s].Raw.Mean)
+			continue
+		}
+		a.AngleToMean[i] = math.NaN()
+		for _, s := range a.Sets {
+			if d := insitu.AxialAngle(p, s.Raw.Mean); !(d >= a.AngleToMean[i]) {
+				a.AngleToMean[i] = d
+			}
+		}
+	}
+	return a
+}
