@@ -31,8 +31,8 @@ type Report struct {
 	States    []DepthState
 	Planes    []ReportPlane // least to most stable
 	BySet     bool          // group the plane table by Set
-	Sets      []ReportSet // joint sets of the field readings, or none
-	SetNote   string      // how the sets were found
+	Sets      []ReportSet   // joint sets of the field readings, or none
+	SetNote   string        // how the sets were found
 	Figures   []ReportFigure
 	Criterion string // the site criterion in words
 	Caution   string
@@ -109,7 +109,10 @@ var reportTmpl = template.Must(template.New("report").Funcs(template.FuncMap{
 	"seq3":   func() []int { return []int{0, 1, 2} },
 	"rake":   fmtRake,
 	"plane":  func(f planes.FisherStats) string { return f.MeanPlane().String() },
-	"pole":   func(f planes.FisherStats) string { l := f.MeanPole(); return fmt.Sprintf("%03.0f/%02.0f", l.Trend, l.Plunge) },
+	"pole": func(f planes.FisherStats) string {
+		l := f.MeanPole()
+		return fmt.Sprintf("%03.0f/%02.0f", l.Trend, l.Plunge)
+	},
 }).Parse(reportTemplate))
 
 // fmtNum formats with up to 4 significant decimals, "—" for NaN.
