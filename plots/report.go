@@ -33,6 +33,7 @@ type Report struct {
 	BySet     bool          // group the plane table by Set
 	Sets      []ReportSet   // joint sets of the field readings, or none
 	SetNote   string        // how the sets were found
+	Slope     *ReportTable // the rock-slope screening, or nil
 	Figures   []ReportFigure
 	Criterion string // the site criterion in words
 	Caution   string
@@ -77,6 +78,15 @@ type ReportSet struct {
 	WoodcockK     float64
 	Depth         float64
 	Result        planes.Result
+}
+
+// ReportTable is a titled table of text cells with notes before it.
+type ReportTable struct {
+	Notes   []string
+	Columns []string
+	Numeric []bool // right-aligned columns
+	Rows    [][]string
+	Empty   string // shown when there are no rows
 }
 
 // ReportFigure is a figure drawn inline, with its caption.

@@ -76,6 +76,8 @@ type assessment struct {
 
 	grouping *grouping // the readings' sets, when the site has readings_file
 	sets     []setRow
+	nPlanes  int // planes[:nPlanes] are the site's planes, the rest readings
+	slope    *slopeScreen // when the site has a slope
 }
 
 func runAssess(o assessOptions, stdout io.Writer) error {
@@ -126,6 +128,12 @@ func runAssess(o assessOptions, stdout io.Writer) error {
 			wrote = append(wrote, path)
 		}
 	}
+	if a.slope != nil {
+		if err := writeFile(filepath.Join(o.out, "slope.csv"), a.slope.write); err != nil {
+			return err
+		}
+		wrote = append(wrote, filepath.Join(o.out, "slope.csv"))
+	}
 	if a.grouping != nil {
 		if err := writeFile(filepath.Join(o.out, "sets.csv"), a.writeSets); err != nil {
 			return err
@@ -151,6 +159,10 @@ func runAssess(o assessOptions, stdout io.Writer) error {
 	}
 	var b strings.Builder
 	a.summary(&b)
+	if a.slope != nil {
+		b.WriteString("\n")
+		a.slope.summary(&b)
+	}
 	names := make([]string, len(wrote))
 	for i, w := range wrote {
 		names[i] = filepath.Base(w)
@@ -185,6 +197,7 @@ func assess(s *site.Site) (*assessment, error) {
 	if name, sum := ps.Table(); name != "" {
 		a.inputs = append(a.inputs, plots.InputFile{Name: name, SHA256: sum})
 	}
+	a.nPlanes = len(a.planes)
 	if s.ReadingsFile != "" {
 		if err := a.addReadings(); err != nil {
 			return nil, err
@@ -192,6 +205,11 @@ func assess(s *site.Site) (*assessment, error) {
 	}
 	if len(a.planes) == 0 {
 		return nil, &site.Error{File: s.File, Msg: "no planes to assess: the tables have a header but no rows"}
+	}
+	if s.Slope != nil {
+		if a.slope, err = a.screenSlope(); err != nil {
+			return nil, err
+		}
 	}
 	a.depths = s.ReportDepths
 	if len(a.depths) == 0 {

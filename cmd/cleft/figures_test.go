@@ -86,7 +86,7 @@ func TestStereonetStructure(t *testing.T) {
 	data, _ := os.ReadFile(out)
 	svgParse(t, data)
 	s := string(data)
-	const planes = 138
+	const planes = 139
 	if n := strings.Count(s, "stroke:#111111"); n != planes+3 {
 		t.Errorf("%d plane markers, want %d planes + 3 in the legend", n, planes)
 	}

@@ -106,19 +106,19 @@ func TestAssessExample(t *testing.T) {
 	if code != 0 {
 		t.Fatalf("exit %d: %s", code, stderr)
 	}
-	for _, want := range []string{"138 planes were screened", "1 is critical", "1 is opening", "136 are stable", "3 sets", "The least stable are F2", "frictional-limit check", "not a substitute"} {
+	for _, want := range []string{"139 planes were screened", "1 is critical", "1 is opening", "137 are stable", "3 sets", "1 planar, 2 wedge", "The least stable are F2", "frictional-limit check", "not a substitute"} {
 		if !strings.Contains(out, want) {
 			t.Errorf("summary lacks %q:\n%s", want, out)
 		}
 	}
 	rows := readCSV(t, filepath.Join(dir, "planes.csv"))
-	if len(rows) != 139 {
-		t.Errorf("planes.csv has %d lines, want header + 138 (5 planes, 133 readings)", len(rows))
+	if len(rows) != 140 {
+		t.Errorf("planes.csv has %d lines, want header + 139 (6 planes, 133 readings)", len(rows))
 	}
 	var js []map[string]any
 	readJSON(t, filepath.Join(dir, "planes.json"), &js)
-	if len(js) != 138 {
-		t.Errorf("planes.json has %d rows, want 138", len(js))
+	if len(js) != 139 {
+		t.Errorf("planes.json has %d rows, want 139", len(js))
 	}
 	var st stressDoc
 	readJSON(t, filepath.Join(dir, "stress.json"), &st)

@@ -65,6 +65,9 @@ func (a *assessment) report(example bool, figs []namedFigure) (*plots.Report, er
 	for _, f := range figs {
 		r.Figures = append(r.Figures, f.ReportFigure)
 	}
+	if a.slope != nil {
+		r.Slope = a.slope.reportTable()
+	}
 	if g := a.grouping; g != nil {
 		r.SetNote = g.explain()
 		for _, st := range a.sets {
@@ -107,6 +110,13 @@ func (a *assessment) figures() []namedFigure {
 			Title:   fmt.Sprintf("Pole density of the %d field readings and their %d sets", len(g.readings), len(g.an.Sets)),
 			Caption: "Kamb (1959) counting of the poles (weighted where the readings are), in multiples of σ: a uniform scatter reads 3σ. Dots are poles of readings in a set, rings unassigned readings; each set mean is shown with its 95 % confidence cone (α95, Fisher 1953). " + g.explain(),
 			Figure:  g.densityNet(a.site.Name, plots.EqualArea), W: cm(0, 19), H: cm(0, 13.5)}})
+	}
+	if a.slope != nil {
+		sl := a.site.Slope
+		figs = append(figs, namedFigure{"slope-kinematic", plots.ReportFigure{
+			Title:   fmt.Sprintf("Kinematic screening of the %s face", sl.Face),
+			Caption: fmt.Sprintf("Lower-hemisphere equal-area net of lines: dip vectors of the planes (circles) and lines of intersection of every pair (squares). A line daylights when it plots beyond the face's great circle and can slide when it also lies inside the friction circle (φ = %.1f°); the darker zone is planar sliding within ±%g° of the face's dip direction, the paler one wedges. The blue sector is the flexural-toppling envelope. Filled symbols are feasible cases.", sl.FrictionAngle, sl.LateralLimit),
+			Figure:  a.kinematicNet(a.slope), W: cm(0, 19), H: cm(0, 13.5)}})
 	}
 	return figs
 }

@@ -77,6 +77,7 @@ below ground; angles in degrees, azimuths clockwise from north.
 		newAssessCmd(),
 		newPlotCmd(),
 		newSetsCmd(),
+		newSlopeCmd(),
 		newExampleCmd(),
 	)
 	root.CompletionOptions.DisableDefaultCmd = true

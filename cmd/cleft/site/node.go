@@ -104,9 +104,16 @@ func kindName(n *yaml.Node) string {
 	return "something else"
 }
 
-// suggest returns the allowed key closest to name by edit distance, if close.
+// suggest returns the allowed key that name begins, or the one closest to
+// it by edit distance when that is close.
 func suggest(name string, allowed []string) string {
 	best, bd := "", 3
+	lower := strings.ToLower(name)
+	for _, a := range allowed { // a key cut short, e.g. lateral for lateral_limit
+		if len(lower) >= 4 && strings.HasPrefix(a, lower) {
+			return a
+		}
+	}
 	for _, a := range allowed {
 		if d := editDistance(strings.ToLower(name), a); d < bd {
 			best, bd = a, d

@@ -43,6 +43,8 @@ type Site struct {
 	ReadingsFile string
 	// Sets is how the readings are grouped (the sets: block, or defaults).
 	Sets SetsConfig
+	// Slope is the cut slope to screen, or nil.
+	Slope *Slope
 
 	// ReportDepths are the depths of report.depths, or nil.
 	ReportDepths []float64
@@ -163,7 +165,7 @@ var parserProblems = []string{
 	"found duplicate %TAG directive",
 }
 
-var topKeys = []string{"site", "depth", "stress", "water", "strength", "planes", "planes_file", "readings_file", "sets", "report"}
+var topKeys = []string{"site", "depth", "stress", "water", "strength", "planes", "planes_file", "readings_file", "sets", "slope", "report"}
 
 func (s *Site) read(root node) error {
 	f, err := root.mapping(topKeys...)
@@ -230,6 +232,11 @@ func (s *Site) read(root node) error {
 			return sv.errf("sets: goes with readings_file: (the field readings to group)")
 		}
 		if err := s.readSets(sv); err != nil {
+			return err
+		}
+	}
+	if sv, ok := f.get("slope"); ok {
+		if err := s.readSlope(sv); err != nil {
 			return err
 		}
 	}

@@ -1,0 +1,166 @@
+package site
+
+import (
+	"fmt"
+	"math"
+
+	"cleft/insitu"
+	"cleft/planes"
+)
+
+// Slope is the site file's slope: block, with its defaults applied.
+type Slope struct {
+	Face          planes.Orientation
+	Top           planes.Orientation // dip 0 for a flat top
+	Height        float64            // m
+	FrictionAngle float64            // ° for the kinematic tests and the planar FS
+	LateralLimit  float64            // ° planar sliding
+	ToppleLimit   float64            // ° flexural toppling
+	UnitWeight    float64            // MN/m³
+	CrackFill     []float64          // water cases, fractions of the crack depth
+	Crack         float64            // m, depth or distance behind the crest
+	CrackByDepth  bool
+	CrackGiven    bool // false: Hoek & Bray's critical depth
+	Cohesion      float64
+	// Defaults lists the keys the file left out, as "key = value (why)".
+	Defaults []string
+}
+
+func (s *Site) readSlope(v node) error {
+	m, err := v.mapping("face", "top", "height", "friction_angle", "lateral_limit", "toppling_limit", "unit_weight", "water", "tension_crack", "source")
+	if err != nil {
+		return err
+	}
+	sl := &Slope{}
+	orient := func(key string) (planes.Orientation, bool, error) {
+		ov, ok := m.get(key)
+		if !ok {
+			return planes.Orientation{}, false, nil
+		}
+		om, err := ov.mapping("dip", "dip_direction")
+		if err != nil {
+			return planes.Orientation{}, true, err
+		}
+		for _, k := range []string{"dip", "dip_direction"} {
+			if !om.has(k) {
+				return planes.Orientation{}, true, om.missing(k, "")
+			}
+		}
+		dip, err := om.vals["dip"].numberIn(unit(interval{lo: 0, hi: 90}, "°"))
+		if err != nil {
+			return planes.Orientation{}, true, err
+		}
+		dd, err := om.vals["dip_direction"].numberIn(unit(interval{lo: 0, hi: 360}, "°"))
+		if err != nil {
+			return planes.Orientation{}, true, err
+		}
+		o, _ := planes.New(dip, dd)
+		return o, true, nil
+	}
+	var ok bool
+	if sl.Face, ok, err = orient("face"); err != nil {
+		return err
+	} else if !ok {
+		return m.missing("face", " ({dip, dip_direction} of the cut face)")
+	}
+	if sl.Face.Dip == 0 {
+		return m.vals["face"].errf("a face dipping 0° is not a slope")
+	}
+	if sl.Top, ok, err = orient("top"); err != nil {
+		return err
+	} else if !ok {
+		sl.Top = planes.MustNew(0, sl.Face.DipDirection)
+		sl.Defaults = append(sl.Defaults, "top = horizontal")
+	}
+	hv, ok := m.get("height")
+	if !ok {
+		return m.missing("height", " (m, toe to crest)")
+	}
+	if sl.Height, err = hv.numberIn(unit(positive, "m")); err != nil {
+		return err
+	}
+	phiDefault := math.Atan(s.Criterion.Friction()) * 180 / math.Pi
+	var given bool
+	if sl.FrictionAngle, given, err = m.optNumber("friction_angle", interval{lo: 0, hi: 90, openLo: true, openHi: true, unit: "°"}, phiDefault); err != nil {
+		return err
+	} else if !given {
+		sl.Defaults = append(sl.Defaults, fmt.Sprintf("friction_angle = %.1f° (atan of the site friction %.4g)", phiDefault, s.Criterion.Friction()))
+	}
+	if sl.LateralLimit, given, err = m.optNumber("lateral_limit", interval{lo: 0, hi: 90, openLo: true, unit: "°"}, 20); err != nil {
+		return err
+	} else if !given {
+		sl.Defaults = append(sl.Defaults, "lateral_limit = 20°")
+	}
+	if sl.ToppleLimit, given, err = m.optNumber("toppling_limit", interval{lo: 0, hi: 90, openLo: true, unit: "°"}, sl.LateralLimit); err != nil {
+		return err
+	} else if !given {
+		sl.Defaults = append(sl.Defaults, fmt.Sprintf("toppling_limit = %g° (the lateral limit)", sl.LateralLimit))
+	}
+	gm, isGradient := s.Model.(*insitu.GradientModel)
+	uv, ok := m.get("unit_weight")
+	switch {
+	case ok:
+		if sl.UnitWeight, err = uv.numberIn(interval{lo: 0, hi: 0.1, openLo: true, unit: "MN/m³"}); err != nil {
+			return err
+		}
+	case isGradient:
+		sl.UnitWeight = gm.VerticalGradient // MPa/m is MN/m³
+		sl.Defaults = append(sl.Defaults, fmt.Sprintf("unit_weight = %.5g MN/m³ (the vertical stress gradient)", sl.UnitWeight))
+	default:
+		return m.missing("unit_weight", " (MN/m³): a measured stress model gives no rock density")
+	}
+	sl.CrackFill = []float64{0, 0.5, 1}
+	if wv, ok := m.get("water"); ok {
+		wm, err := wv.mapping("tension_crack_fill")
+		if err != nil {
+			return err
+		}
+		if fv, ok := wm.get("tension_crack_fill"); ok {
+			items, err := fv.list()
+			if err != nil {
+				return err
+			}
+			if len(items) == 0 {
+				return fv.errf("give at least one fraction in [0, 1]")
+			}
+			sl.CrackFill = nil
+			for _, it := range items {
+				f, err := it.numberIn(interval{lo: 0, hi: 1})
+				if err != nil {
+					return err
+				}
+				sl.CrackFill = append(sl.CrackFill, f)
+			}
+		}
+	} else {
+		sl.Defaults = append(sl.Defaults, "water.tension_crack_fill = [0, 0.5, 1]")
+	}
+	if cv, ok := m.get("tension_crack"); ok {
+		cm, err := cv.mapping("distance", "depth")
+		if err != nil {
+			return err
+		}
+		switch k := cm.present("distance", "depth"); len(k) {
+		case 0:
+			return cv.errf("give distance (m behind the crest) or depth (m below the upper surface)")
+		case 2:
+			return cm.vals["depth"].errf("give distance or depth, not both")
+		}
+		sl.CrackGiven = true
+		if dv, ok := cm.get("depth"); ok {
+			sl.CrackByDepth = true
+			if sl.Crack, err = dv.numberIn(unit(nonNegative, "m")); err != nil {
+				return err
+			}
+		} else if sl.Crack, err = cm.vals["distance"].numberIn(unit(nonNegative, "m")); err != nil {
+			return err
+		}
+	} else {
+		sl.Defaults = append(sl.Defaults, "tension_crack = Hoek & Bray's critical depth for each plane")
+	}
+	if c, ok := s.Criterion.(*planes.Coulomb); ok {
+		sl.Cohesion = c.Cohesion
+	}
+	s.Slope = sl
+	return nil
+}
