@@ -33,7 +33,7 @@ type Report struct {
 	BySet     bool          // group the plane table by Set
 	Sets      []ReportSet   // joint sets of the field readings, or none
 	SetNote   string        // how the sets were found
-	Slope     *ReportTable // the rock-slope screening, or nil
+	Slope     *ReportTable  // the rock-slope screening, or nil
 	Figures   []ReportFigure
 	Criterion string // the site criterion in words
 	Caution   string

@@ -76,7 +76,7 @@ type assessment struct {
 
 	grouping *grouping // the readings' sets, when the site has readings_file
 	sets     []setRow
-	nPlanes  int // planes[:nPlanes] are the site's planes, the rest readings
+	nPlanes  int          // planes[:nPlanes] are the site's planes, the rest readings
 	slope    *slopeScreen // when the site has a slope
 }
 
