@@ -189,3 +189,33 @@ func TestPlanarBlock(t *testing.T) {
 		t.Error("a crack meeting the plane in front of the crest was accepted")
 	}
 }
+
+func TestClassifyDrive(t *testing.T) {
+	// Bieniawski (1989) orientation adjustment for tunnels (memory), at the
+	// band edges of this tool's reading (≥ 45° strike-to-axis is
+	// perpendicular; dips of 20° and 45° go to the steeper band).
+	const drive = 90.0 // driving east
+	for _, c := range []struct {
+		name  string
+		o     Orientation
+		class string
+		drive string
+	}{
+		{"perpendicular, with dip, steep", MustNew(60, 90), "very favourable", "with dip"},
+		{"perpendicular, with dip, dip 45 is steep", MustNew(45, 90), "very favourable", "with dip"},
+		{"perpendicular, with dip, 20–45", MustNew(30, 90), "favourable", "with dip"},
+		{"perpendicular, with dip, dip 20 is 20–45", MustNew(20, 90), "favourable", "with dip"},
+		{"perpendicular, against dip, steep", MustNew(60, 270), "fair", "against dip"},
+		{"perpendicular, against dip, 20–45", MustNew(30, 270), "unfavourable", "against dip"},
+		{"strike exactly 45° to the axis counts as perpendicular", MustNew(60, 45), "very favourable", "with dip"},
+		{"strike 44° to the axis is parallel", MustNew(60, 44), "very unfavourable", ""},
+		{"parallel, steep", MustNew(80, 0), "very unfavourable", ""},
+		{"parallel, 20–45", MustNew(30, 180), "fair", ""},
+		{"flat, any strike", MustNew(19.9, 90), "fair", ""},
+	} {
+		got := ClassifyDrive(c.o, drive)
+		if got.Class != c.class || got.Drive != c.drive {
+			t.Errorf("%s (%v, strike %v° to the axis): %+v", c.name, c.o, got.StrikeToAxis, got)
+		}
+	}
+}

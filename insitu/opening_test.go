@@ -1,0 +1,105 @@
+package insitu
+
+import (
+	"math"
+	"math/rand/v2"
+	"testing"
+
+	"gonum.org/v1/gonum/floats/scalar"
+	"gonum.org/v1/gonum/spatial/r3"
+)
+
+func TestKirschCheckValues(t *testing.T) {
+	// A horizontal tunnel: Up is vertical, so σ11 is the vertical far field.
+	// Kirsch (1898); Hoek & Brown (1980):
+	//  - hydrostatic p: σθ = 2p all round;
+	//  - uniaxial vertical p: 3p at the sidewalls, −p at crown and invert;
+	//  - K = 1/3: no tangential stress at the crown.
+	const p = 10.0
+	for th := 0.0; th < 360; th += 15 {
+		if w := Wall(Tensor{NN: p, EE: p, DD: p}, th, 0.25); !scalar.EqualWithinAbs(w.Theta, 2*p, 1e-12) {
+			t.Fatalf("hydrostatic: σθ(%v) = %v, want %v", th, w.Theta, 2*p)
+		}
+	}
+	uni := Tensor{NN: p}
+	for _, c := range []struct{ th, want float64 }{{0, -p}, {180, -p}, {90, 3 * p}, {270, 3 * p}} {
+		if w := Wall(uni, c.th, 0.25); !scalar.EqualWithinAbs(w.Theta, c.want, 1e-12) {
+			t.Errorf("uniaxial vertical: σθ(%v) = %v, want %v", c.th, w.Theta, c.want)
+		}
+	}
+	if w := Wall(Tensor{NN: p, EE: p / 3}, 0, 0.25); !scalar.EqualWithinAbs(w.Theta, 0, 1e-12) {
+		t.Errorf("K = 1/3: crown σθ = %v, want 0", w.Theta)
+	}
+	// Brady & Brown eqs. 6.18–6.20 (read), derived: p = 10, K = 0.5: sidewall
+	// 25, crown 5; K = 0: 30 and −10.
+	for _, c := range []struct{ k, side, crown float64 }{{0.5, 25, 5}, {0, 30, -10}} {
+		far := Tensor{NN: p, EE: c.k * p}
+		if s, cr := Wall(far, 90, 0.2).Theta, Wall(far, 0, 0.2).Theta; !scalar.EqualWithinAbs(s, c.side, 1e-12) || !scalar.EqualWithinAbs(cr, c.crown, 1e-12) {
+			t.Errorf("K = %v: sidewall %v, crown %v; want %v, %v", c.k, s, cr, c.side, c.crown)
+		}
+	}
+}
+
+func TestTunnelFrame(t *testing.T) {
+	rng := rand.New(rand.NewPCG(61, 62))
+	for range 200 {
+		l := Line{Trend: rng.Float64() * 360, Plunge: rng.Float64()*20 - 10}
+		u, r, a := TunnelFrame(l)
+		if d := r3.Dot(r3.Cross(u, r), a); !scalar.EqualWithinAbs(d, 1, 1e-12) {
+			t.Fatalf("%v: (up, right, axis) not right-handed: %v", l, d)
+		}
+		if u.Z >= 0 || math.Abs(r.Z) > 1e-12 {
+			t.Fatalf("%v: up %v not upward or right %v not horizontal", l, u, r)
+		}
+		// Rotation into the tunnel frame keeps the invariants.
+		s := Tensor{NN: 30, EE: 18, DD: 22, NE: 3, ND: -1, ED: 2}
+		f := s.Rotate([3]r3.Vec{u, r, a})
+		i2 := func(t Tensor) float64 {
+			return t.NN*t.EE + t.EE*t.DD + t.DD*t.NN - t.NE*t.NE - t.ND*t.ND - t.ED*t.ED
+		}
+		if !scalar.EqualWithinAbs(f.Trace(), s.Trace(), 1e-10) || !scalar.EqualWithinAbs(i2(f), i2(s), 1e-9) {
+			t.Fatalf("%v: invariants changed", l)
+		}
+	}
+	// A tunnel along SHmax sees (Sv, Shmin) in its section and SHmax along it.
+	s := Andersonian(40, 20, 30, 65)
+	u, r, a := TunnelFrame(Line{Trend: 65})
+	f := s.Rotate([3]r3.Vec{u, r, a})
+	if !scalar.EqualWithinAbs(f.NN, 30, 1e-12) || !scalar.EqualWithinAbs(f.EE, 20, 1e-12) || !scalar.EqualWithinAbs(f.DD, 40, 1e-12) || math.Abs(f.NE) > 1e-12 {
+		t.Errorf("along SHmax: section %v %v, axis %v", f.NN, f.EE, f.DD)
+	}
+}
+
+func TestWallTensor(t *testing.T) {
+	// The wall tensor reproduces σθ, σz, τθz on its own axes and has no
+	// traction on the wall (σr = 0, τrθ = τrz = 0).
+	u, r, a := TunnelFrame(Line{Trend: 30, Plunge: 2})
+	for th := 0.0; th < 360; th += 30 {
+		w := WallStress{Theta: 25, Z: 12, ThetaZ: -3}
+		m := w.WallTensor(u, r, a, th)
+		s, c := SinCosDeg(th)
+		e := r3.Add(r3.Scale(-s, u), r3.Scale(c, r))
+		radial := r3.Add(r3.Scale(c, u), r3.Scale(s, r))
+		if got := r3.Dot(e, m.Apply(e)); !scalar.EqualWithinAbs(got, 25, 1e-12) {
+			t.Errorf("θ %v: σθ %v", th, got)
+		}
+		if got := r3.Dot(a, m.Apply(e)); !scalar.EqualWithinAbs(got, -3, 1e-12) {
+			t.Errorf("θ %v: τθz %v", th, got)
+		}
+		if tr := m.Apply(radial); r3.Norm(tr) > 1e-12 {
+			t.Errorf("θ %v: traction on the wall %v", th, tr)
+		}
+	}
+}
+
+func TestSpallingBand(t *testing.T) {
+	// Martin, Kaiser & McCreath (1999) (read): spalling starts at σθ,max/σc ≈ 0.4 ± 0.1.
+	for _, c := range []struct {
+		r    float64
+		want string
+	}{{0.2, "below"}, {0.3, "at the onset"}, {0.45, "at the onset"}, {0.5, "at the onset"}, {0.51, "past"}} {
+		if got := SpallingBand(c.r); len(got) < len(c.want) || got[:len(c.want)] != c.want {
+			t.Errorf("ratio %v: %q", c.r, got)
+		}
+	}
+}
