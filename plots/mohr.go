@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"image/color"
 	"math"
+	"strconv"
 
 	"cleft/insitu"
 	"cleft/planes"
@@ -329,12 +330,11 @@ func (niceTicks) Ticks(lo, hi float64) []plot.Tick {
 			break
 		}
 	}
+	dec := max(0, int(-math.Floor(math.Log10(step)+1e-9)))
 	var ts []plot.Tick
-	for v := math.Ceil(lo/step) * step; v <= hi+1e-9*step; v += step {
-		if math.Abs(v) < 1e-9*step {
-			v = 0
-		}
-		ts = append(ts, plot.Tick{Value: v, Label: fmt.Sprintf("%g", math.Round(v/step)*step)})
+	for k := math.Ceil(lo/step - 1e-9); k*step <= hi+1e-9*step; k++ {
+		v := k * step
+		ts = append(ts, plot.Tick{Value: v, Label: strconv.FormatFloat(v+0, 'f', dec, 64)})
 	}
 	return ts
 }

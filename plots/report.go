@@ -34,6 +34,7 @@ type Report struct {
 	Sets      []ReportSet   // joint sets of the field readings, or none
 	SetNote   string        // how the sets were found
 	Slope     *ReportTable  // the rock-slope screening, or nil
+	Tunnel    *ReportTable  // the tunnel screening, or nil
 	Figures   []ReportFigure
 	Criterion string // the site criterion in words
 	Caution   string

@@ -78,6 +78,7 @@ type assessment struct {
 	sets     []setRow
 	nPlanes  int          // planes[:nPlanes] are the site's planes, the rest readings
 	slope    *slopeScreen // when the site has a slope
+	tunnel   *tunnelScreen // when the site has a tunnel
 }
 
 func runAssess(o assessOptions, stdout io.Writer) error {
@@ -128,6 +129,11 @@ func runAssess(o assessOptions, stdout io.Writer) error {
 			wrote = append(wrote, path)
 		}
 	}
+	if a.tunnel != nil {
+		if err := a.writeTunnel(o.out, a.tunnel.worst(), &wrote, false); err != nil {
+			return err
+		}
+	}
 	if a.slope != nil {
 		if err := writeFile(filepath.Join(o.out, "slope.csv"), a.slope.write); err != nil {
 			return err
@@ -162,6 +168,10 @@ func runAssess(o assessOptions, stdout io.Writer) error {
 	if a.slope != nil {
 		b.WriteString("\n")
 		a.slope.summary(&b)
+	}
+	if a.tunnel != nil {
+		b.WriteString("\n")
+		a.tunnel.summary(&b)
 	}
 	names := make([]string, len(wrote))
 	for i, w := range wrote {
@@ -208,6 +218,11 @@ func assess(s *site.Site) (*assessment, error) {
 	}
 	if s.Slope != nil {
 		if a.slope, err = a.screenSlope(); err != nil {
+			return nil, err
+		}
+	}
+	if s.Tunnel != nil {
+		if a.tunnel, err = a.screenTunnel(); err != nil {
 			return nil, err
 		}
 	}

@@ -68,6 +68,9 @@ func (a *assessment) report(example bool, figs []namedFigure) (*plots.Report, er
 	if a.slope != nil {
 		r.Slope = a.slope.reportTable()
 	}
+	if a.tunnel != nil {
+		r.Tunnel = a.tunnel.reportTable()
+	}
 	if g := a.grouping; g != nil {
 		r.SetNote = g.explain()
 		for _, st := range a.sets {
@@ -110,6 +113,9 @@ func (a *assessment) figures() []namedFigure {
 			Title:   fmt.Sprintf("Pole density of the %d field readings and their %d sets", len(g.readings), len(g.an.Sets)),
 			Caption: "Kamb (1959) counting of the poles (weighted where the readings are), in multiples of σ: a uniform scatter reads 3σ. Dots are poles of readings in a set, rings unassigned readings; each set mean is shown with its 95 % confidence cone (α95, Fisher 1953). " + g.explain(),
 			Figure:  g.densityNet(a.site.Name, plots.EqualArea), W: cm(0, 19), H: cm(0, 13.5)}})
+	}
+	if a.tunnel != nil {
+		figs = append(figs, a.tunnelFigures(a.tunnel.worst())...)
 	}
 	if a.slope != nil {
 		sl := a.site.Slope

@@ -78,6 +78,7 @@ below ground; angles in degrees, azimuths clockwise from north.
 		newPlotCmd(),
 		newSetsCmd(),
 		newSlopeCmd(),
+		newTunnelCmd(),
 		newExampleCmd(),
 	)
 	root.CompletionOptions.DisableDefaultCmd = true

@@ -45,6 +45,8 @@ type Site struct {
 	Sets SetsConfig
 	// Slope is the cut slope to screen, or nil.
 	Slope *Slope
+	// Tunnel is the alignment to screen, or nil.
+	Tunnel *Tunnel
 
 	// ReportDepths are the depths of report.depths, or nil.
 	ReportDepths []float64
@@ -93,7 +95,9 @@ func unwrapPath(err error) error {
 
 // Parse reads a site file from data; name is used in errors and to resolve
 // planes_file.
-func Parse(data []byte, name string) (*Site, error) {
+func Parse(data []byte, name string) (*Site, error) { return parse(data, name, nil) }
+
+func parse(data []byte, name string, fsys fs.FS) (*Site, error) {
 	dec := yaml.NewDecoder(bytes.NewReader(data))
 	var doc yaml.Node
 	if err := dec.Decode(&doc); err != nil {
@@ -111,7 +115,7 @@ func Parse(data []byte, name string) (*Site, error) {
 		root.n = resolveAlias(root.n.Content[0])
 	}
 	sum := sha256.Sum256(data)
-	s := &Site{File: name, SHA256: hex.EncodeToString(sum[:])}
+	s := &Site{File: name, SHA256: hex.EncodeToString(sum[:]), fsys: fsys}
 	if err := s.read(root); err != nil {
 		return nil, err
 	}
@@ -125,12 +129,7 @@ func ParseFS(fsys fs.FS, name string) (*Site, error) {
 	if err != nil {
 		return nil, err
 	}
-	s, err := Parse(data, name)
-	if err != nil {
-		return nil, err
-	}
-	s.fsys = fsys
-	return s, nil
+	return parse(data, name, fsys)
 }
 
 // yamlError turns the YAML library's syntax error into a one-line Error.
@@ -165,7 +164,7 @@ var parserProblems = []string{
 	"found duplicate %TAG directive",
 }
 
-var topKeys = []string{"site", "depth", "stress", "water", "strength", "planes", "planes_file", "readings_file", "sets", "slope", "report"}
+var topKeys = []string{"site", "depth", "stress", "water", "strength", "planes", "planes_file", "readings_file", "sets", "slope", "tunnel", "report"}
 
 func (s *Site) read(root node) error {
 	f, err := root.mapping(topKeys...)
@@ -237,6 +236,11 @@ func (s *Site) read(root node) error {
 	}
 	if sv, ok := f.get("slope"); ok {
 		if err := s.readSlope(sv); err != nil {
+			return err
+		}
+	}
+	if tv, ok := f.get("tunnel"); ok {
+		if err := s.readTunnel(tv); err != nil {
 			return err
 		}
 	}

@@ -1,0 +1,309 @@
+package site
+
+import (
+	"encoding/csv"
+	"errors"
+	"fmt"
+	"io"
+	"math"
+	"sort"
+	"strconv"
+	"strings"
+)
+
+// Leg is a straight leg of a tunnel alignment, chainages in m.
+type Leg struct {
+	From, To      float64
+	Trend, Plunge float64 // of the drive, °; plunge negative for a rising drive
+}
+
+// Tunnel is the site file's tunnel: block.
+type Tunnel struct {
+	Legs     []Leg
+	Cover    [][2]float64 // (chainage, cover above the crown), m, increasing chainage
+	Spacing  float64      // m between stations
+	Radius   float64      // m
+	UCS      float64      // MPa
+	Poisson  float64
+	Sets     []string // planes and sets to screen; nil for all
+	Drained  bool     // wall pore pressure 0 (else the far field's)
+	Defaults []string
+}
+
+// Station is a point of the alignment where the tunnel is screened.
+type Station struct {
+	Chainage      float64
+	Trend, Plunge float64 // of the drive
+	Cover         float64 // m of rock above the crown
+	Depth         float64 // of the tunnel axis: cover + radius
+}
+
+func (s *Site) readTunnel(v node) error {
+	m, err := v.mapping("alignment", "cover", "cover_file", "spacing", "radius", "rock", "sets", "wall_pore_pressure", "source")
+	if err != nil {
+		return err
+	}
+	t := &Tunnel{}
+	av, ok := m.get("alignment")
+	if !ok {
+		return m.missing("alignment", " (legs {from, to, trend, plunge} in chainage order)")
+	}
+	legs, err := av.list()
+	if err != nil {
+		return err
+	}
+	if len(legs) == 0 {
+		return av.errf("give at least one leg")
+	}
+	for i, lv := range legs {
+		lm, err := lv.mapping("from", "to", "trend", "plunge")
+		if err != nil {
+			return err
+		}
+		var l Leg
+		for _, k := range []struct {
+			key string
+			dst *float64
+			iv  interval
+		}{
+			{"from", &l.From, unit(nonNegative, "m")},
+			{"to", &l.To, unit(nonNegative, "m")},
+			{"trend", &l.Trend, unit(interval{lo: 0, hi: 360}, "°")},
+			{"plunge", &l.Plunge, unit(interval{lo: -45, hi: 45}, "°")},
+		} {
+			kv, ok := lm.get(k.key)
+			if !ok {
+				if k.key == "plunge" {
+					continue // level
+				}
+				return lm.missing(k.key, " (each leg has from and to chainages, m, and the drive's trend, °)")
+			}
+			if *k.dst, err = kv.numberIn(k.iv); err != nil {
+				return err
+			}
+		}
+		if !(l.To > l.From) {
+			return lv.errf("leg from %g to %g m: to must be beyond from", l.From, l.To)
+		}
+		if i > 0 {
+			prev := t.Legs[i-1]
+			switch {
+			case l.From > prev.To:
+				return lv.errf("a gap in the alignment between chainage %g and %g m: legs must join", prev.To, l.From)
+			case l.From < prev.To:
+				return lv.errf("legs overlap between chainage %g and %g m: each leg must start where the last ended", l.From, prev.To)
+			}
+		}
+		t.Legs = append(t.Legs, l)
+	}
+	switch k := m.present("cover", "cover_file"); len(k) {
+	case 0:
+		return m.missing("cover", " (pairs [chainage, cover] in m) or cover_file:")
+	case 2:
+		return m.vals["cover_file"].errf("give cover or cover_file, not both")
+	}
+	if cv, ok := m.get("cover"); ok {
+		items, err := cv.list()
+		if err != nil {
+			return err
+		}
+		for _, it := range items {
+			pair, err := it.list()
+			if err != nil || len(pair) != 2 {
+				return it.errf("want a pair [chainage, cover] in m")
+			}
+			ch, err := pair[0].numberIn(unit(nonNegative, "m"))
+			if err != nil {
+				return err
+			}
+			c, err := pair[1].numberIn(unit(nonNegative, "m"))
+			if err != nil {
+				return err
+			}
+			t.Cover = append(t.Cover, [2]float64{ch, c})
+		}
+		if err := checkProfile(t.Cover); err != nil {
+			return cv.errf("%v", err)
+		}
+	} else {
+		fv := m.vals["cover_file"]
+		p, err := fv.text()
+		if err != nil {
+			return err
+		}
+		path := resolvePath(s.File, p)
+		f, err := s.open(path)
+		if err != nil {
+			return fv.errf("cannot open %s: %v", path, unwrapPath(err))
+		}
+		t.Cover, err = readCover(f, path)
+		f.Close()
+		if err != nil {
+			return err
+		}
+	}
+	var given bool
+	if t.Spacing, given, err = m.optNumber("spacing", unit(positive, "m"), 50); err != nil {
+		return err
+	} else if !given {
+		t.Defaults = append(t.Defaults, "spacing = 50 m")
+	}
+	if t.Radius, given, err = m.optNumber("radius", unit(positive, "m"), 1); err != nil {
+		return err
+	} else if !given {
+		t.Defaults = append(t.Defaults, "radius = 1 m")
+	}
+	rv, ok := m.get("rock")
+	if !ok {
+		return m.missing("rock", " ({ucs: MPa, poisson: ratio})")
+	}
+	rm, err := rv.mapping("ucs", "poisson", "source")
+	if err != nil {
+		return err
+	}
+	uv, ok := rm.get("ucs")
+	if !ok {
+		return rm.missing("ucs", " (MPa, uniaxial compressive strength of the intact rock)")
+	}
+	if t.UCS, err = uv.numberIn(unit(positive, "MPa")); err != nil {
+		return err
+	}
+	if t.Poisson, given, err = rm.optNumber("poisson", interval{lo: 0, hi: 0.5, openHi: true}, 0.25); err != nil {
+		return err
+	} else if !given {
+		t.Defaults = append(t.Defaults, "rock.poisson = 0.25")
+	}
+	if sv, ok := m.get("sets"); ok {
+		items, err := sv.list()
+		if err != nil {
+			return err
+		}
+		for _, it := range items {
+			name, err := it.text()
+			if err != nil {
+				return err
+			}
+			t.Sets = append(t.Sets, name)
+		}
+	}
+	t.Drained = true
+	if wv, ok := m.get("wall_pore_pressure"); ok {
+		w, err := wv.oneOf("drained", "far-field")
+		if err != nil {
+			return err
+		}
+		t.Drained = w == "drained"
+	} else {
+		t.Defaults = append(t.Defaults, "wall_pore_pressure = drained (Pp = 0 at the wall)")
+	}
+	s.Tunnel = t
+	return nil
+}
+
+func checkProfile(c [][2]float64) error {
+	if len(c) < 2 {
+		return fmt.Errorf("a cover profile needs at least two points")
+	}
+	for i := 1; i < len(c); i++ {
+		if !(c[i][0] > c[i-1][0]) {
+			return fmt.Errorf("chainages must increase: %g after %g", c[i][0], c[i-1][0])
+		}
+	}
+	return nil
+}
+
+// readCover reads a cover profile table with columns chainage and cover.
+func readCover(r io.Reader, name string) ([][2]float64, error) {
+	cr := csv.NewReader(r)
+	cr.Comment = '#'
+	cr.TrimLeadingSpace = true
+	head, err := cr.Read()
+	if errors.Is(err, io.EOF) {
+		return nil, &Error{File: name, Msg: "empty: want a header row with chainage and cover"}
+	}
+	if err != nil {
+		return nil, &Error{File: name, Msg: "not valid CSV: " + err.Error()}
+	}
+	ic, iv := -1, -1
+	for i, h := range head {
+		switch strings.ToLower(strings.TrimSpace(h)) {
+		case "chainage":
+			ic = i
+		case "cover":
+			iv = i
+		}
+	}
+	if ic < 0 || iv < 0 {
+		return nil, &Error{File: name, Line: 1, Msg: "the header needs the columns chainage and cover (m)"}
+	}
+	var out [][2]float64
+	for {
+		rec, err := cr.Read()
+		if errors.Is(err, io.EOF) {
+			break
+		}
+		line, _ := cr.FieldPos(0)
+		if err != nil {
+			return nil, &Error{File: name, Line: line, Msg: "not valid CSV: " + err.Error()}
+		}
+		var p [2]float64
+		for j, i := range []int{ic, iv} {
+			v, err := strconv.ParseFloat(strings.TrimSpace(rec[i]), 64)
+			if err != nil || math.IsNaN(v) || math.IsInf(v, 0) || v < 0 {
+				return nil, &Error{File: name, Line: line, Key: head[i], Msg: fmt.Sprintf("%q: want a number ≥ 0 (m)", rec[i])}
+			}
+			p[j] = v
+		}
+		out = append(out, p)
+	}
+	if err := checkProfile(out); err != nil {
+		return nil, &Error{File: name, Msg: err.Error()}
+	}
+	return out, nil
+}
+
+// CoverAt interpolates the cover profile linearly at chainage ch; false
+// outside the profile.
+func (t *Tunnel) CoverAt(ch float64) (float64, bool) {
+	c := t.Cover
+	if ch < c[0][0] || ch > c[len(c)-1][0] {
+		return 0, false
+	}
+	i := sort.Search(len(c), func(i int) bool { return c[i][0] >= ch })
+	if c[i][0] == ch {
+		return c[i][1], true
+	}
+	a, b := c[i-1], c[i]
+	return a[1] + (b[1]-a[1])*(ch-a[0])/(b[0]-a[0]), true
+}
+
+// Stations returns the stations every Spacing from the start of the first
+// leg, and the end of the last; a station on a leg boundary takes the drive
+// of the leg it starts. A station outside the cover profile is an error
+// naming its chainage.
+func (t *Tunnel) Stations(file string) ([]Station, error) {
+	start, end := t.Legs[0].From, t.Legs[len(t.Legs)-1].To
+	var chs []float64
+	for k := 0; ; k++ {
+		ch := start + float64(k)*t.Spacing
+		if ch >= end-1e-9 {
+			break
+		}
+		chs = append(chs, ch)
+	}
+	chs = append(chs, end)
+	var out []Station
+	leg := 0
+	for _, ch := range chs {
+		for leg < len(t.Legs)-1 && ch >= t.Legs[leg].To {
+			leg++
+		}
+		cover, ok := t.CoverAt(ch)
+		if !ok {
+			return nil, &Error{File: file, Key: "tunnel.cover", Msg: fmt.Sprintf("station at chainage %g m lies outside the cover profile (%g to %g m)", ch, t.Cover[0][0], t.Cover[len(t.Cover)-1][0])}
+		}
+		l := t.Legs[leg]
+		out = append(out, Station{Chainage: ch, Trend: l.Trend, Plunge: l.Plunge, Cover: cover, Depth: cover + t.Radius})
+	}
+	return out, nil
+}
