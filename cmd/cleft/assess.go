@@ -76,8 +76,8 @@ type assessment struct {
 
 	grouping *grouping // the readings' sets, when the site has readings_file
 	sets     []setRow
-	nPlanes  int          // planes[:nPlanes] are the site's planes, the rest readings
-	slope    *slopeScreen // when the site has a slope
+	nPlanes  int           // planes[:nPlanes] are the site's planes, the rest readings
+	slope    *slopeScreen  // when the site has a slope
 	tunnel   *tunnelScreen // when the site has a tunnel
 }
 
