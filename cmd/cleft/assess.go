@@ -5,12 +5,10 @@ import (
 	"fmt"
 	"io"
 	"math"
-	"os"
 	"path/filepath"
 	"sort"
 	"strings"
 
-	"cleft/cmd/cleft/demo"
 	"cleft/cmd/cleft/site"
 	"cleft/cmd/cleft/table"
 	"cleft/planes"
@@ -43,15 +41,7 @@ least stable three, and the frictional-limit check of the stress model.
 --example uses the invented demo site built into cleft (see cleft example).
 
 ` + caution,
-		Args: func(cmd *cobra.Command, args []string) error {
-			if o.example {
-				if len(args) > 0 {
-					return usagef("give a site file or --example, not both")
-				}
-				return nil
-			}
-			return oneSite(cmd, args)
-		},
+		Args: siteOrExample(&o.example),
 		RunE: func(cmd *cobra.Command, args []string) error {
 			if len(args) == 1 {
 				o.site = args[0]
@@ -85,13 +75,7 @@ func runAssess(o assessOptions, stdout io.Writer) error {
 	if o.out == "" {
 		return usagef("give --out DIR, the folder for the outputs")
 	}
-	var s *site.Site
-	var err error
-	if o.example {
-		s, err = site.ParseFS(demo.FS, demo.Site)
-	} else {
-		s, err = site.Load(o.site)
-	}
+	s, err := loadSite(o.example, o.site)
 	if err != nil {
 		return err
 	}
@@ -99,8 +83,8 @@ func runAssess(o assessOptions, stdout io.Writer) error {
 	if err != nil {
 		return err
 	}
-	if err := os.MkdirAll(o.out, 0o755); err != nil {
-		return fmt.Errorf("%s: cannot create the output folder: %w", o.out, unwrapPath(err))
+	if err := makeDir(o.out); err != nil {
+		return err
 	}
 	var wrote []string
 	for _, f := range []struct {

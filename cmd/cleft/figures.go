@@ -3,6 +3,7 @@ package main
 import (
 	"fmt"
 	"io"
+	"math"
 	"sort"
 	"strings"
 
@@ -36,6 +37,14 @@ func (a *assessment) figureDepth() float64 {
 	}
 	sort.Float64s(ds)
 	return ds[len(ds)/2]
+}
+
+// depthFor is the depth asked for in o, or the figure depth.
+func (a *assessment) depthFor(o figureOptions) float64 {
+	if math.IsNaN(o.depth) {
+		return a.figureDepth()
+	}
+	return o.depth
 }
 
 // traced reports whether plane i gets its great circle drawn.
@@ -75,10 +84,7 @@ func (a *assessment) checkTraces(which string) error {
 }
 
 func (a *assessment) stereonet(o figureOptions) *plots.Stereonet {
-	z := o.depth
-	if z != z {
-		z = a.figureDepth()
-	}
+	z := a.depthFor(o)
 	st := &plots.Stereonet{
 		Site:      a.site.Name,
 		Model:     a.site.Summary(),
@@ -114,10 +120,7 @@ func writeFigure(f plots.Figure, w, h vg.Length, path string) error {
 // that depth (site.Resolver.ResolveAt), the site's envelope and one for each
 // distinct per-plane Coulomb criterion.
 func (a *assessment) mohr(o figureOptions) *plots.Mohr {
-	z := o.depth
-	if z != z {
-		z = a.figureDepth()
-	}
+	z := a.depthFor(o)
 	m := &plots.Mohr{
 		Site:  a.site.Name,
 		Model: a.site.Summary(),

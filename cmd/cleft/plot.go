@@ -4,8 +4,6 @@ import (
 	"math"
 	"strings"
 
-	"cleft/cmd/cleft/demo"
-	"cleft/cmd/cleft/site"
 	"cleft/plots"
 
 	"github.com/spf13/cobra"
@@ -48,15 +46,7 @@ The default depth is the site's depth:, else the median plane depth.
 Measures: ` + strings.Join(plots.Measures(), ", ") + `.
 
 ` + caution,
-		Args: func(cmd *cobra.Command, args []string) error {
-			if o.example {
-				if len(args) > 0 {
-					return usagef("give a site file or --example, not both")
-				}
-				return nil
-			}
-			return oneSite(cmd, args)
-		},
+		Args: siteOrExample(&o.example),
 		RunE: func(cmd *cobra.Command, args []string) error {
 			if len(args) == 1 {
 				o.site = args[0]
@@ -105,12 +95,7 @@ func runPlot(o plotOptions, cmd *cobra.Command) error {
 			return usagef("--width/--height %v cm: want 4 to 100 cm", v)
 		}
 	}
-	var s *site.Site
-	if o.example {
-		s, err = site.ParseFS(demo.FS, demo.Site)
-	} else {
-		s, err = site.Load(o.site)
-	}
+	s, err := loadSite(o.example, o.site)
 	if err != nil {
 		return err
 	}

@@ -4,7 +4,11 @@ import (
 	"errors"
 	"fmt"
 	"io"
+	"os"
 	"strings"
+
+	"cleft/cmd/cleft/demo"
+	"cleft/cmd/cleft/site"
 
 	"github.com/spf13/cobra"
 )
@@ -83,6 +87,36 @@ below ground; angles in degrees, azimuths clockwise from north.
 	)
 	root.CompletionOptions.DisableDefaultCmd = true
 	return root
+}
+
+// siteOrExample is the argument check of the commands that take a site file
+// or --example.
+func siteOrExample(example *bool) cobra.PositionalArgs {
+	return func(cmd *cobra.Command, args []string) error {
+		if *example {
+			if len(args) > 0 {
+				return usagef("give a site file or --example, not both")
+			}
+			return nil
+		}
+		return oneSite(cmd, args)
+	}
+}
+
+// loadSite loads the site file at path, or the built-in demo.
+func loadSite(example bool, path string) (*site.Site, error) {
+	if example {
+		return site.ParseFS(demo.FS, demo.Site)
+	}
+	return site.Load(path)
+}
+
+// makeDir creates an output folder.
+func makeDir(dir string) error {
+	if err := os.MkdirAll(dir, 0o755); err != nil {
+		return fmt.Errorf("%s: cannot create the output folder: %w", dir, unwrapPath(err))
+	}
+	return nil
 }
 
 // oneSite is the argument check of the commands that take one site file.

@@ -4,7 +4,6 @@ import (
 	"fmt"
 	"io"
 	"math"
-	"os"
 	"path/filepath"
 	"sort"
 	"strings"
@@ -309,8 +308,8 @@ func runSets(o setsOptions, stdin io.Reader, stdout io.Writer) error {
 	var b strings.Builder
 	g.summary(&b)
 	if o.out != "" {
-		if err := os.MkdirAll(o.out, 0o755); err != nil {
-			return fmt.Errorf("%s: cannot create the output folder: %w", o.out, unwrapPath(err))
+		if err := makeDir(o.out); err != nil {
+			return err
 		}
 		var wrote []string
 		for _, f := range []struct {

@@ -4,7 +4,6 @@ import (
 	"fmt"
 	"io"
 	"math"
-	"os"
 	"path/filepath"
 	"strconv"
 	"strings"
@@ -216,19 +215,16 @@ func runSlope(o slopeOptions, stdout io.Writer) error {
 	if s.Slope == nil {
 		return &site.Error{File: s.File, Msg: "no slope: block: give the face, height and the rest (see README, Rock slopes)"}
 	}
-	a, err := assess(s)
+	a, err := assess(s) // screens the slope too
 	if err != nil {
 		return err
 	}
-	sc, err := a.screenSlope()
-	if err != nil {
-		return err
-	}
+	sc := a.slope
 	var b strings.Builder
 	sc.summary(&b)
 	if o.out != "" {
-		if err := os.MkdirAll(o.out, 0o755); err != nil {
-			return fmt.Errorf("%s: cannot create the output folder: %w", o.out, unwrapPath(err))
+		if err := makeDir(o.out); err != nil {
+			return err
 		}
 		if err := writeFile(filepath.Join(o.out, "slope.csv"), sc.write); err != nil {
 			return err

@@ -6,6 +6,7 @@ import (
 	"sort"
 	"strings"
 
+	"cleft/cmd/cleft/site"
 	"cleft/planes"
 )
 
@@ -47,6 +48,11 @@ type limitFacts struct {
 	ExceededAt   []float64 `json:"exceeded_at_depths_m"`
 }
 
+func newLeast(name string, p *site.Plane, r planes.Result) leastPlane {
+	return leastPlane{Name: name, Dip: num(p.Orientation.Dip), DipDirection: num(p.Orientation.DipDirection), Depth: num(p.Depth),
+		State: r.State.String(), EffectiveNormal: num(r.EffectiveNormal), FactorOfSafety: num(r.FactorOfSafety), PressureToSlip: num(r.PressureToSlip)}
+}
+
 // facts gathers the summary figures of an assessment.
 func (a *assessment) facts() summaryFacts {
 	f := summaryFacts{Site: a.site.Name, Planes: len(a.results), DepthMin: num(math.Inf(1)), DepthMax: num(math.Inf(-1))}
@@ -64,9 +70,7 @@ func (a *assessment) facts() summaryFacts {
 	}
 	rank := a.ranked()
 	for _, i := range rank[:min(3, len(rank))] {
-		p, r := a.planes[i], a.results[i]
-		f.LeastStable = append(f.LeastStable, leastPlane{Name: p.Name, Dip: num(p.Orientation.Dip), DipDirection: num(p.Orientation.DipDirection),
-			Depth: num(p.Depth), State: r.State.String(), EffectiveNormal: num(r.EffectiveNormal), FactorOfSafety: num(r.FactorOfSafety), PressureToSlip: num(r.PressureToSlip)})
+		f.LeastStable = append(f.LeastStable, newLeast(a.planes[i].Name, &a.planes[i], a.results[i]))
 	}
 	if a.grouping != nil {
 		f.Readings = len(a.grouping.readings)
@@ -76,10 +80,7 @@ func (a *assessment) facts() summaryFacts {
 		}
 		sort.SliceStable(idx, func(i, j int) bool { return planes.LessStable(a.sets[idx[i]].result, a.sets[idx[j]].result) })
 		for _, i := range idx {
-			st := a.sets[i]
-			f.Sets = append(f.Sets, leastPlane{Name: st.name, Dip: num(st.plane.Orientation.Dip), DipDirection: num(st.plane.Orientation.DipDirection),
-				Depth: num(st.plane.Depth), State: st.result.State.String(), EffectiveNormal: num(st.result.EffectiveNormal),
-				FactorOfSafety: num(st.result.FactorOfSafety), PressureToSlip: num(st.result.PressureToSlip)})
+			f.Sets = append(f.Sets, newLeast(a.sets[i].name, &a.sets[i].plane, a.sets[i].result))
 		}
 	}
 	f.Limit = limitFacts{Friction: a.states[0].Friction, Limit: a.states[0].Limit, Depths: a.depths, LargestRatio: num(math.Inf(-1)), ExceededAt: []float64{}}

@@ -4,7 +4,6 @@ import (
 	"fmt"
 	"io"
 	"math"
-	"os"
 	"path/filepath"
 	"strings"
 
@@ -360,8 +359,8 @@ func runTunnel(o tunnelOptions, stdout io.Writer) error {
 				return usagef("--station %g: no station at that chainage (stations every %g m from %g)", o.station, sc.t.Spacing, sc.stations[0].st.Chainage)
 			}
 		}
-		if err := os.MkdirAll(o.out, 0o755); err != nil {
-			return fmt.Errorf("%s: cannot create the output folder: %w", o.out, unwrapPath(err))
+		if err := makeDir(o.out); err != nil {
+			return err
 		}
 		if err := a.writeTunnel(o.out, idx, nil, true); err != nil {
 			return err
