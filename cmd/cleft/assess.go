@@ -35,6 +35,10 @@ func newAssessCmd() *cobra.Command {
   stereonet-slip.svg/.png   tendency stereonet of slip tendency (see cleft plot)
   stereonet-dilation.svg/.png  the same for dilation tendency
   mohr.svg/.png             Mohr diagram of effective stress
+  report.html, summary.json the report for the project geologist, and its figures
+  with readings_file:       sets.csv, sets-density.svg/.png (see cleft sets)
+  with slope:               slope.csv, slope-kinematic.svg/.png (see cleft slope)
+  with tunnel:              stations.csv, wall.csv, profile.csv, tunnel-*.svg/.png
 
 and prints a short summary: how many planes are critical or opening, the
 least stable three, and the frictional-limit check of the stress model.

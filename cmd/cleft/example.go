@@ -21,7 +21,7 @@ func newExampleCmd() *cobra.Command {
 	var o exampleOptions
 	c := &cobra.Command{
 		Use:   "example DIR",
-		Short: "Write the demo site file and its planes table to edit",
+		Short: "Write the demo site file, planes table and readings to edit",
 		Long: `example writes DIR/site.yaml, DIR/planes.csv and DIR/readings.csv, the invented demo site
 that 'cleft assess --example' uses, as a starting point for your own site.
 It does not overwrite existing files unless --force is given.`,

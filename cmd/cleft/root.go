@@ -58,7 +58,10 @@ func newRootCmd(stdin io.Reader, stdout, stderr io.Writer, started *bool) *cobra
 the strength of the discontinuities and the mapped planes (dip / dip direction)
 — and works out, for every plane, the normal and shear stress, slip and
 dilation tendency, factor of safety, the rise in water pressure that would make
-it slip, and the sense of slip.
+it slip, and the sense of slip; groups raw field readings into joint sets;
+screens a cut slope (planar, wedge, toppling, tension-crack factor of safety)
+and a tunnel alignment (boundary stresses, joint slip at the wall); and writes
+stereonets, Mohr diagrams, charts and a self-contained report.
 
 Conventions: x north, y east, z down; compression positive; MPa; depths in m
 below ground; angles in degrees, azimuths clockwise from north.
