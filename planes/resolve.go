@@ -53,7 +53,8 @@ type Result struct {
 	// PressureToSlip is the rise in pore pressure that brings the plane to its
 	// strength, (σn' − σn'crit)/α with σn'crit the criterion's CriticalNormal(τ):
 	// for Coulomb (σn' − (τ − c)/μ)/α. Negative when the plane is already past
-	// its strength.
+	// its strength. With no shear (τ = 0) it is the rise that takes the
+	// strength to zero: for a cohesionless plane, the pressure that opens it.
 	PressureToSlip float64
 	// Rake of the hanging-wall slip, parallel to the resolved shear traction
 	// (Wallace 1951; Bott 1959), measured in the plane from the strike (Aki &
