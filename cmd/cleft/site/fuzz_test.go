@@ -3,10 +3,13 @@ package site
 import (
 	"errors"
 	"io"
+	"io/fs"
 	"os"
 	"path/filepath"
 	"strings"
 	"testing"
+
+	"cleft/cmd/cleft/demo"
 )
 
 // seeds adds every file of the top-level testdata/good and testdata/bad
@@ -28,6 +31,9 @@ func seeds(f *testing.F, pattern string) {
 // panic, and a site that loads has a model and a criterion.
 func FuzzParse(f *testing.F) {
 	seeds(f, "*.yaml")
+	if data, err := fs.ReadFile(demo.FS, demo.Site); err == nil { // slope:, tunnel:, sets:
+		f.Add(data)
+	}
 	f.Fuzz(func(t *testing.T, data []byte) {
 		s, err := Parse(data, "fuzz.yaml")
 		if err != nil {
