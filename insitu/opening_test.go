@@ -103,3 +103,27 @@ func TestSpallingBand(t *testing.T) {
 		}
 	}
 }
+
+func TestWallRotatesWithTheFarField(t *testing.T) {
+	// Turning the far field by β about the axis turns the wall stresses with
+	// it: Wall(R·σ·Rᵀ)(θ) = Wall(σ)(θ − β). This checks the signs of the σ12,
+	// σ13 and σ23 terms against the σ11, σ22 and σ33 ones, which the Kirsch
+	// values fix.
+	rng := rand.New(rand.NewPCG(63, 64))
+	for range 200 {
+		far := Tensor{NN: 5 + rng.Float64()*20, EE: 5 + rng.Float64()*20, DD: 5 + rng.Float64()*20,
+			NE: rng.Float64()*6 - 3, ND: rng.Float64()*6 - 3, ED: rng.Float64()*6 - 3}
+		beta := rng.Float64() * 360
+		// Frame turned by −β about the axis (x3): the rows of q are the new
+		// axes expressed in the old ones.
+		s, c := SinCosDeg(beta)
+		q := [3]r3.Vec{{X: c, Y: -s}, {X: s, Y: c}, {Z: 1}}
+		turned := far.Rotate(q)
+		for th := 0.0; th < 360; th += 30 {
+			a, b := Wall(turned, th, 0.3), Wall(far, th-beta, 0.3)
+			if !scalar.EqualWithinAbs(a.Theta, b.Theta, 1e-9) || !scalar.EqualWithinAbs(a.Z, b.Z, 1e-9) || !scalar.EqualWithinAbs(a.ThetaZ, b.ThetaZ, 1e-9) {
+				t.Fatalf("β %v θ %v: %+v vs %+v", beta, th, a, b)
+			}
+		}
+	}
+}
