@@ -64,13 +64,13 @@ func (s *Stereonet) drawKey(c draw.Canvas, lo, hi float64) {
 	c.FillText(note, vg.Point{X: x, Y: bottom - vg.Points(23)}, "background: same scale, paler")
 
 	// The legend.
-	y = bottom - vg.Points(42)
+	y = bottom - vg.Points(40)
 	row := func(glyph func(at vg.Point), txt string) {
 		glyph(vg.Point{X: x + vg.Points(6), Y: y})
 		t := textStyle(7.5, false, ink)
 		t.YAlign = draw.YCenter
 		c.FillText(t, vg.Point{X: x + vg.Points(18), Y: y}, txt)
-		y -= vg.Points(14)
+		y -= vg.Points(12.5)
 	}
 	mid := ramp.At(0.5)
 	count := map[planes.PlaneState]int{}
@@ -91,6 +91,11 @@ func (s *Stereonet) drawKey(c draw.Canvas, lo, hi float64) {
 		row(func(a vg.Point) {
 			c.StrokeLine2(draw.LineStyle{Color: ink, Width: vg.Points(0.9)}, a.X-6, a.Y, a.X+6, a.Y)
 		}, "great circle of a named plane")
+	}
+	if len(s.Means) > 0 {
+		row(func(a vg.Point) {
+			c.StrokeLine2(draw.LineStyle{Color: ink, Width: vg.Points(0.9), Dashes: []vg.Length{vg.Points(4), vg.Points(2)}}, a.X-6, a.Y, a.X+6, a.Y)
+		}, "mean plane of a joint set")
 	}
 	row(func(a vg.Point) {
 		c.DrawGlyph(draw.GlyphStyle{Color: undefinedFill, Radius: vg.Points(4), Shape: draw.BoxGlyph{}}, a)

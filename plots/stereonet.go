@@ -38,6 +38,9 @@ type Stereonet struct {
 	Grid      bool      // draw a 10° polar grid (plunge circles, trend radials)
 	Contours  []float64 // levels; nil for the measure's defaults
 	Poles     []Pole
+	// Means are planes drawn only as dashed great circles (the mean planes
+	// of joint sets), named at their east end.
+	Means []Pole
 
 	// Field is the tendency field, computed by Draw at the resolution the
 	// canvas needs (FieldSize) and kept for inspection.
@@ -158,7 +161,7 @@ func (s *Stereonet) Draw(c draw.Canvas) {
 	s.drawPoles(n, lo, hi)
 	drawAxes(n, s.Proj, s.State.Principal)
 
-	col := draw.Crop(body, side+vg.Points(16), 0, 0, 0)
+	col := draw.Crop(body, side+vg.Points(30), 0, 0, 0)
 	s.drawKey(col, lo, hi)
 }
 
@@ -259,14 +262,23 @@ func (s *Stereonet) drawContours(n net, lo, hi float64) {
 
 func (s *Stereonet) drawTraces(n net) {
 	sty := draw.LineStyle{Color: ink, Width: vg.Points(0.9)}
+	dashed := draw.LineStyle{Color: ink, Width: vg.Points(0.9), Dashes: []vg.Length{vg.Points(4), vg.Points(2)}}
 	lab := textStyle(7, false, ink)
 	lab.XAlign, lab.YAlign = draw.XCenter, draw.YCenter
+	traced := append([]Pole(nil), s.Means...)
 	for _, p := range s.Poles {
-		if !p.Trace {
-			continue
+		if p.Trace {
+			traced = append(traced, p)
+		}
+	}
+	var placed []vg.Point
+	for i, p := range traced {
+		st := sty
+		if i < len(s.Means) {
+			st = dashed
 		}
 		pts := s.Proj.GreatCircle(p.Orientation, 90)
-		n.c.StrokeLines(sty, n.path(pts))
+		n.c.StrokeLines(st, n.path(pts))
 		// Name just outside the primitive, at the end of the trace on the
 		// east side (the west side is where the key is not, but keeping one
 		// rule makes the names easy to find).
@@ -274,9 +286,26 @@ func (s *Stereonet) drawTraces(n net) {
 		if pts[len(pts)-1].X > end.X {
 			end = pts[len(pts)-1]
 		}
-		at := n.pt(Point{X: end.X * 1.1, Y: end.Y * 1.1})
+		// Step outwards past names already placed close by.
+		f := 1.1
+		at := n.pt(Point{X: end.X * f, Y: end.Y * f})
+		for tries := 0; tries < 6 && crowded(at, placed); tries++ {
+			f += 0.06
+			at = n.pt(Point{X: end.X * f, Y: end.Y * f})
+		}
+		placed = append(placed, at)
 		haloText(n.c, lab, at, p.Name)
 	}
+}
+
+// crowded reports whether at is within 10 pt of any of the points.
+func crowded(at vg.Point, pts []vg.Point) bool {
+	for _, p := range pts {
+		if math.Hypot(float64(at.X-p.X), float64(at.Y-p.Y)) < 10 {
+			return true
+		}
+	}
+	return false
 }
 
 // haloText draws text with a white halo so that it reads over the raster.

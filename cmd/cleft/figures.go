@@ -99,6 +99,11 @@ func (a *assessment) stereonet(o figureOptions) *plots.Stereonet {
 	for i, p := range a.planes {
 		st.Poles = append(st.Poles, plots.Pole{Name: p.Name, Orientation: p.Orientation, Result: a.results[i], Trace: a.traced(i, o.traces)})
 	}
+	if o.traces != "none" {
+		for _, s := range a.sets {
+			st.Means = append(st.Means, plots.Pole{Name: s.name, Orientation: s.plane.Orientation, Result: s.result})
+		}
+	}
 	return st
 }
 

@@ -96,7 +96,7 @@ func (a *assessment) figures() []namedFigure {
 	figs := []namedFigure{
 		{"stereonet-slip", plots.ReportFigure{
 			Title: fmt.Sprintf("Slip tendency of every plane, and of every orientation at %g m", z),
-			Caption: fmt.Sprintf("Lower-hemisphere equal-area net of poles to planes. Each pole is coloured by the plane's own slip tendency Ts = τ/σn' at its own depth and shaped by its state (circle stable, triangle critical, square with a cross opening). The paler background is Ts for every orientation at %g m with the site's water model and strength; thin lines are its contours, the dark red line (if any) is where the factor of safety is 1 and orientations past it would slip. Black symbols are the principal stress axes; great circles are drawn for the critical and opening planes. %s",
+			Caption: fmt.Sprintf("Lower-hemisphere equal-area net of poles to planes. Each pole is coloured by the plane's own slip tendency Ts = τ/σn' at its own depth and shaped by its state (circle stable, triangle critical, square with a cross opening). The paler background is Ts for every orientation at %g m with the site's water model and strength; thin lines are its contours, the dark red line (if any) is where the factor of safety is 1 and orientations past it would slip. Black symbols are the principal stress axes; great circles are drawn for the critical and opening planes, dashed ones for the mean planes of the joint sets. %s",
 				z, traceNote(a)),
 			Figure: a.stereonet(fo.with(plots.SlipTendency)), W: cm(0, 19), H: cm(0, 13.5)}},
 		{"stereonet-dilation", plots.ReportFigure{
