@@ -38,7 +38,7 @@ func FuzzEscaping(f *testing.F) {
 func TestUndefinedValues(t *testing.T) {
 	p := site.Plane{Name: "P", Orientation: planes.MustNew(90, 0), Depth: 10}
 	nan := math.NaN()
-	r := planes.Result{SlipTendency: nan, NormalisedSlip: nan, DilationTendency: nan, FactorOfSafety: nan, Rake: nan, Normal: -0.0, State: planes.Opening}
+	r := planes.Result{SlipTendency: nan, NormalisedSlip: nan, DilationTendency: nan, FactorOfSafety: nan, Rake: nan, Normal: math.Copysign(0, -1), State: planes.Opening}
 	row := string(AppendRow(nil, CSV, &p, &r, nil, true))
 	rec, err := csv.NewReader(strings.NewReader(row)).Read()
 	if err != nil || len(rec) != len(Columns) {
