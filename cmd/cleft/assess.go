@@ -172,6 +172,7 @@ func runAssess(o assessOptions, stdout io.Writer) error {
 
 // assess resolves every plane of s and the stress at the report depths.
 func assess(s *site.Site) (*assessment, error) {
+	s.AllowReadingsOnly()
 	ps, err := s.OpenPlanes("", nil)
 	if err != nil {
 		return nil, err
@@ -205,9 +206,7 @@ func assess(s *site.Site) (*assessment, error) {
 		return nil, &site.Error{File: s.File, Msg: "no planes to assess: the tables have a header but no rows"}
 	}
 	if s.Slope != nil {
-		if a.slope, err = a.screenSlope(); err != nil {
-			return nil, err
-		}
+		a.slope = a.screenSlope()
 	}
 	if s.Tunnel != nil {
 		if a.tunnel, err = a.screenTunnel(); err != nil {

@@ -74,3 +74,17 @@ func TestSetsBadInput(t *testing.T) {
 		}
 	}
 }
+
+func TestReadingsOnlySite(t *testing.T) {
+	dir := t.TempDir()
+	data, _ := os.ReadFile(demoReadings)
+	os.WriteFile(filepath.Join(dir, "r.csv"), data, 0o644)
+	p := filepath.Join(dir, "s.yaml")
+	os.WriteFile(p, []byte("site: s\ndepth: 100\nstress:\n  vertical: {gradient: 0.026}\n  shmax: {ratio: 1.2, azimuth: 90}\n  shmin: {ratio: 0.7}\nreadings_file: r.csv\n"), 0o644)
+	if code, out, stderr := cleft(t, "", "assess", p, "--out", filepath.Join(dir, "o")); code != 0 || !strings.Contains(out, "133 planes were screened") {
+		t.Errorf("assess: exit %d, %s %s", code, out, stderr)
+	}
+	if code, _, stderr := cleft(t, "", "resolve", p); code != 1 || !strings.Contains(stderr, "cleft assess groups into sets") {
+		t.Errorf("resolve: exit %d, %s", code, stderr)
+	}
+}

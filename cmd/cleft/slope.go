@@ -98,7 +98,7 @@ func (a *assessment) candidates() []candidate {
 }
 
 // screenSlope runs every test on every candidate and pair.
-func (a *assessment) screenSlope() (*slopeScreen, error) {
+func (a *assessment) screenSlope() *slopeScreen {
 	sl := a.site.Slope
 	sc := &slopeScreen{slope: sl, cands: a.candidates()}
 	phi := sl.FrictionAngle
@@ -114,13 +114,16 @@ func (a *assessment) screenSlope() (*slopeScreen, error) {
 			}
 			b, err := planes.NewPlanarBlock(sl.Height, psiF, topDip(c.o.DipDirection), c.o.Dip, crack, byDepth, sl.UnitWeight)
 			if err != nil {
-				return nil, fmt.Errorf("%s: slope: plane %s: %w", a.site.File, c.name, err)
+				// Kinematically feasible, but the block's geometry is outside
+				// the limit-equilibrium model: say so in the row.
+				r.k.Mode += "; factor of safety not computed: " + err.Error()
+			} else {
+				r.crack = b.CrackDepth
+				for _, f := range sl.CrackFill {
+					r.fs = append(r.fs, b.FS(c.c, c.phi, f*b.CrackDepth))
+				}
+				r.waterToF = b.WaterDepthToFail(c.c, c.phi)
 			}
-			r.crack = b.CrackDepth
-			for _, f := range sl.CrackFill {
-				r.fs = append(r.fs, b.FS(c.c, c.phi, f*b.CrackDepth))
-			}
-			r.waterToF = b.WaterDepthToFail(c.c, c.phi)
 		}
 		sc.rows = append(sc.rows, r)
 	}
@@ -135,7 +138,7 @@ func (a *assessment) screenSlope() (*slopeScreen, error) {
 		k := planes.FlexuralToppling(c.o, sl.Face, phi, sl.ToppleLimit)
 		sc.rows = append(sc.rows, slopeRow{test: "flexural-toppling", planes: c.name, k: k, line: c.o.DipLine(), crack: math.NaN(), waterToF: math.NaN()})
 	}
-	return sc, nil
+	return sc
 }
 
 func (sc *slopeScreen) columns() []string {
@@ -187,6 +190,10 @@ func (sc *slopeScreen) summary(b *strings.Builder) {
 		}
 		switch r.test {
 		case "planar":
+			if len(r.fs) == 0 {
+				fmt.Fprintf(b, "  planar %s: %s.\n", r.planes, r.k.Mode)
+				continue
+			}
 			var fs []string
 			for i, f := range sl.CrackFill {
 				fs = append(fs, fmt.Sprintf("%.2f (crack %g%% full)", r.fs[i], 100*f))

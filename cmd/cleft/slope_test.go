@@ -70,3 +70,17 @@ func TestSlopeBadInput(t *testing.T) {
 		t.Errorf("no slope block: exit %d, %q", code, stderr)
 	}
 }
+
+func TestSlopeBlockOutsideTheModel(t *testing.T) {
+	// A feasible planar case whose plane dips less steeply than the upper
+	// surface cannot be a tension-crack block: the row says so, nothing fails.
+	dir := t.TempDir()
+	p := filepath.Join(dir, "s.yaml")
+	os.WriteFile(p, []byte("site: s\nstress:\n  vertical: {gradient: 0.026}\n  shmax: {ratio: 1.2, azimuth: 90}\n  shmin: {ratio: 0.7}\n"+
+		"planes: [{name: A, dip: 40, dip_direction: 210, depth: 10}]\n"+
+		"slope: {face: {dip: 65, dip_direction: 210}, top: {dip: 45, dip_direction: 210}, height: 20, friction_angle: 30}\n"), 0o644)
+	code, out, stderr := cleft(t, "", "slope", p, "--out", dir)
+	if code != 0 || !strings.Contains(out, "factor of safety not computed") {
+		t.Errorf("exit %d, %s %s", code, out, stderr)
+	}
+}

@@ -77,8 +77,6 @@ func parsePlane(vals *[nCols]string, present *[nCols]bool, d planeDefaults, errA
 		}
 		return v, true, nil
 	}
-	var ok bool
-	var err error
 	dip, ok, err := num(colDip)
 	if err != nil {
 		return p, err

@@ -60,6 +60,10 @@ type Site struct {
 	summary   []string // parts of Summary
 	inlineSet bool     // some inline plane has set:
 	fsys      fs.FS    // where planes_file is read from; nil for the OS
+
+	// readingsOnly: the caller will add readings as planes (assess), so a
+	// site with readings and no planes is not an error. Set by AllowReadingsOnly.
+	readingsOnly bool
 }
 
 // Param is one input parameter as the report lists it.
@@ -121,6 +125,10 @@ func parse(data []byte, name string, fsys fs.FS) (*Site, error) {
 	}
 	return s, nil
 }
+
+// AllowReadingsOnly lets OpenPlanes open a site whose only planes are its
+// readings (which the caller adds itself).
+func (s *Site) AllowReadingsOnly() { s.readingsOnly = s.ReadingsFile != "" }
 
 // ParseFS reads the site file name from fsys; its planes_file is read from
 // fsys too. It serves the demo embedded in the binary.

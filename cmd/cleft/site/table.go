@@ -181,8 +181,12 @@ func (s *Site) OpenPlanes(table string, stdin io.Reader) (*PlaneStream, error) {
 			}
 			r, ps.closer, name = f, f, s.PlanesFile
 		}
-		if r == nil && len(s.Planes) == 0 && s.ReadingsFile == "" {
-			return nil, &Error{File: s.File, Msg: "no planes: give planes: or planes_file: in the site file, or --planes FILE.csv"}
+		if r == nil && len(s.Planes) == 0 && !s.readingsOnly {
+			msg := "no planes: give planes: or planes_file: in the site file, or --planes FILE.csv"
+			if s.ReadingsFile != "" {
+				msg = "no planes: the site has only readings_file:, which cleft assess groups into sets and resolves; give planes: or planes_file:, or --planes FILE.csv"
+			}
+			return nil, &Error{File: s.File, Msg: msg}
 		}
 	}
 	if r != nil {
