@@ -312,3 +312,25 @@ func TestExampleWritesAndRefusesOverwrite(t *testing.T) {
 		t.Errorf("assess of the written example: exit %d: %s", code, stderr)
 	}
 }
+
+func TestFrictionalLimitWarning(t *testing.T) {
+	// SHmax 2.2·Sv and Shmin 0.5·Sv, hydrostatic from the surface: at any
+	// depth (2.2 − 0.37)/(0.5 − 0.37) ≫ 3.12, so the state is past the limit
+	// for μ = 0.6 and must be reported, not rejected (Zoback 2007).
+	dir := t.TempDir()
+	p := filepath.Join(dir, "s.yaml")
+	os.WriteFile(p, []byte("site: s\nstress:\n  vertical: {gradient: 0.026}\n  shmax: {ratio: 2.2, azimuth: 90}\n  shmin: {ratio: 0.5}\nplanes: [{name: A, dip: 60, dip_direction: 0, depth: 300}]\n"), 0o644)
+	code, out, _ := cleft(t, "", "stress", p, "--depth", "300")
+	if code != 0 || !strings.Contains(out, "EXCEEDS the limit") || !strings.Contains(out, "regime: strike-slip (σ2 vertical)") {
+		t.Errorf("stress: exit %d\n%s", code, out)
+	}
+	code, out, _ = cleft(t, "", "stress", p, "--depth", "300", "--format", "json")
+	var d stressDoc
+	if code != 0 || json.Unmarshal([]byte(out), &d) != nil || !d.States[0].Exceeds {
+		t.Errorf("stress json: exit %d, %s", code, out)
+	}
+	code, out, _ = cleft(t, "", "assess", p, "--out", dir)
+	if code != 0 || !strings.Contains(out, "EXCEEDS the frictional limit") {
+		t.Errorf("assess: exit %d\n%s", code, out)
+	}
+}
