@@ -49,11 +49,27 @@ func azDiff(a, b float64) float64 {
 	return d
 }
 
+// Condition is a condition of a kinematic test, as a bit of Kinematic.Fails.
+type Condition int
+
+const (
+	// Lateral: the dip direction is beyond the lateral limit.
+	Lateral Condition = 1 << iota
+	// Daylight: the plane or line does not daylight in the face (or, for a
+	// wedge, its line plunges into the slope).
+	Daylight
+	// Friction: it dips or plunges less than the friction angle.
+	Friction
+	// Toppling: (90° − dip) + φ exceeds the face dip.
+	Toppling
+)
+
 // Kinematic is the outcome of one kinematic test: feasible, or the
-// conditions that fail, in words.
+// conditions that fail, in words and as bits.
 type Kinematic struct {
 	Feasible bool
-	Failed   []string // the conditions not met, empty when feasible
+	Fails    Condition // the conditions not met, 0 when feasible
+	Failed   []string  // the same in words
 	// Mode says how a feasible wedge slides: "sliding on both planes" or
 	// "single-plane sliding on NAME".
 	Mode string
@@ -81,12 +97,15 @@ func (k Kinematic) Reason() string {
 func PlanarSliding(p, f Orientation, phi, lateral float64) Kinematic {
 	var k Kinematic
 	if d := azDiff(p.DipDirection, f.DipDirection); d > lateral {
+		k.Fails |= Lateral
 		k.Failed = append(k.Failed, fmt.Sprintf("dip direction %.0f° from the face's, beyond the lateral limit of %g°", d, lateral))
 	}
 	if app := ApparentDip(f, p.DipDirection); !(p.Dip < app) {
+		k.Fails |= Daylight
 		k.Failed = append(k.Failed, fmt.Sprintf("does not daylight: dips %.0f°, the face %.1f° in that direction", p.Dip, app))
 	}
 	if p.Dip < phi {
+		k.Fails |= Friction
 		k.Failed = append(k.Failed, fmt.Sprintf("dips %.0f°, less than the friction angle %g°", p.Dip, phi))
 	}
 	k.Feasible = len(k.Failed) == 0
@@ -107,7 +126,7 @@ func WedgeSliding(a, b Orientation, na, nb string, f Orientation, phi float64) (
 	var k Kinematic
 	l, ok := Intersection(a, b)
 	if !ok {
-		k.Failed = []string{"the planes are parallel: no line of intersection"}
+		k.Fails, k.Failed = Daylight, []string{"the planes are parallel: no line of intersection"}
 		return l, k
 	}
 	// Of the two senses of a horizontal line, take the one towards the face.
@@ -115,11 +134,14 @@ func WedgeSliding(a, b Orientation, na, nb string, f Orientation, phi float64) (
 		l.Trend = insitu.Azimuth(l.Trend + 180)
 	}
 	if d := azDiff(l.Trend, f.DipDirection); d >= 90 {
+		k.Fails |= Daylight
 		k.Failed = append(k.Failed, fmt.Sprintf("the line plunges into the slope (trend %.0f°, %.0f° from the face's dip direction)", l.Trend, d))
 	} else if app := ApparentDip(f, l.Trend); !(l.Plunge < app) {
+		k.Fails |= Daylight
 		k.Failed = append(k.Failed, fmt.Sprintf("does not daylight: the line plunges %.1f°, the face %.1f° along it", l.Plunge, app))
 	}
 	if l.Plunge < phi {
+		k.Fails |= Friction
 		k.Failed = append(k.Failed, fmt.Sprintf("the line plunges %.1f°, less than the friction angle %g°", l.Plunge, phi))
 	}
 	k.Feasible = len(k.Failed) == 0
@@ -153,9 +175,11 @@ func between(x, a, b float64) bool {
 func FlexuralToppling(p, f Orientation, phi, lateral float64) Kinematic {
 	var k Kinematic
 	if d := azDiff(p.DipDirection, f.DipDirection+180); d > lateral {
+		k.Fails |= Lateral
 		k.Failed = append(k.Failed, fmt.Sprintf("does not dip into the face: dip direction %.0f° from the opposite of the face's, beyond the lateral limit of %g°", d, lateral))
 	}
 	if s := 90 - p.Dip + phi; s > f.Dip {
+		k.Fails |= Toppling
 		k.Failed = append(k.Failed, fmt.Sprintf("(90° − dip) + φ = %.0f° exceeds the face dip %g°", s, f.Dip))
 	}
 	k.Feasible = len(k.Failed) == 0

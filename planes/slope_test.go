@@ -60,21 +60,22 @@ func TestPlanarSliding(t *testing.T) {
 	// condition.
 	const phi, lat = 35, 20
 	for _, c := range []struct {
-		name string
-		p    Orientation
-		ok   bool
-		why  string
+		name  string
+		p     Orientation
+		ok    bool
+		why   string
+		fails Condition
 	}{
-		{"feasible", MustNew(45, 200), true, ""},
-		{"beyond the lateral limit", MustNew(45, 240), false, "lateral limit"},
-		{"steeper than the face", MustNew(70, 210), false, "does not daylight"},
-		{"flatter than φ", MustNew(30, 210), false, "friction angle"},
-		{"exactly at φ passes", MustNew(35, 210), true, ""},
-		{"exactly at the lateral limit passes", MustNew(45, 230), true, ""},
-		{"exactly the face dip does not daylight", MustNew(65, 210), false, "does not daylight"},
+		{"feasible", MustNew(45, 200), true, "", 0},
+		{"beyond the lateral limit", MustNew(45, 240), false, "lateral limit", Lateral},
+		{"steeper than the face", MustNew(70, 210), false, "does not daylight", Daylight},
+		{"flatter than φ", MustNew(30, 210), false, "friction angle", Friction},
+		{"exactly at φ passes", MustNew(35, 210), true, "", 0},
+		{"exactly at the lateral limit passes", MustNew(45, 230), true, "", 0},
+		{"exactly the face dip does not daylight", MustNew(65, 210), false, "does not daylight", Daylight},
 	} {
 		k := PlanarSliding(c.p, face, phi, lat)
-		if k.Feasible != c.ok || (c.why != "" && !contains(k.Reason(), c.why)) {
+		if k.Feasible != c.ok || (c.why != "" && !contains(k.Reason(), c.why)) || k.Fails != c.fails {
 			t.Errorf("%s: %+v", c.name, k)
 		}
 	}

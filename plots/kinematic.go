@@ -20,7 +20,8 @@ type KinItem struct {
 	Line         insitu.Line
 	Intersection bool // a wedge's line, else a plane's dip vector
 	Feasible     bool
-	Toppling     bool // feasible for flexural toppling (dip vectors only)
+	Toppling     bool             // feasible for flexural toppling (dip vectors only)
+	Fails        planes.Condition // of the sliding test (planar or wedge), when not feasible
 }
 
 // KinematicNet is the kinematic stereonet of a cut slope, drawn with lines
@@ -136,8 +137,10 @@ func (k *KinematicNet) fillTopple(n net) {
 }
 
 // kinGlyph: dip vectors are circles, lines of intersection squares; filled
-// dark red when sliding is feasible, blue when toppling is, open grey when
-// neither.
+// dark red when sliding is feasible, blue when toppling is; otherwise grey,
+// by the condition of the sliding test that fails: open when the line does
+// not daylight, light grey when it daylights but is flatter than φ, darker
+// grey when only the lateral limit stops planar sliding.
 func kinGlyph(c *draw.Canvas, it KinItem, at vg.Point) {
 	var fill color.Color = white
 	edge := color.Color(grey)
@@ -146,6 +149,11 @@ func kinGlyph(c *draw.Canvas, it KinItem, at vg.Point) {
 		fill, edge = toppleInk, poleInk
 	case it.Feasible:
 		fill, edge = warning, poleInk
+	case it.Fails&planes.Daylight != 0:
+	case it.Fails&planes.Friction != 0:
+		fill = light
+	case it.Fails&planes.Lateral != 0:
+		fill = grey
 	}
 	r := vg.Points(3)
 	if it.Intersection {
@@ -181,9 +189,10 @@ func (k *KinematicNet) drawKey(c draw.Canvas) {
 	}
 	row(func(a vg.Point) { kinGlyph(&c, KinItem{Feasible: true}, a) }, fmt.Sprintf("dip vector, planar sliding feasible (%d)", count(func(i KinItem) bool { return !i.Intersection && i.Feasible })))
 	row(func(a vg.Point) { kinGlyph(&c, KinItem{Toppling: true}, a) }, fmt.Sprintf("dip vector, flexural toppling feasible (%d)", count(func(i KinItem) bool { return i.Toppling })))
-	row(func(a vg.Point) { kinGlyph(&c, KinItem{}, a) }, "dip vector, neither")
+	row(func(a vg.Point) { kinGlyph(&c, KinItem{Fails: planes.Lateral}, a) }, "dip vector, sliding only beyond the lateral limit")
 	row(func(a vg.Point) { kinGlyph(&c, KinItem{Intersection: true, Feasible: true}, a) }, fmt.Sprintf("line of intersection, wedge feasible (%d)", count(func(i KinItem) bool { return i.Intersection && i.Feasible })))
-	row(func(a vg.Point) { kinGlyph(&c, KinItem{Intersection: true}, a) }, "line of intersection, not feasible")
+	row(func(a vg.Point) { kinGlyph(&c, KinItem{Intersection: true, Fails: planes.Friction}, a) }, "grey: daylights, flatter than φ")
+	row(func(a vg.Point) { kinGlyph(&c, KinItem{Intersection: true, Fails: planes.Daylight}, a) }, "open: does not daylight")
 	row(func(a vg.Point) {
 		c.StrokeLine2(draw.LineStyle{Color: ink, Width: vg.Points(1.8)}, a.X-6, a.Y, a.X+6, a.Y)
 	}, "face great circle: lines beyond it daylight")

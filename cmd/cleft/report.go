@@ -121,7 +121,7 @@ func (a *assessment) figures() []namedFigure {
 		sl := a.site.Slope
 		figs = append(figs, namedFigure{"slope-kinematic", plots.ReportFigure{
 			Title:   fmt.Sprintf("Kinematic screening of the %s face", sl.Face),
-			Caption: fmt.Sprintf("Lower-hemisphere equal-area net of lines: dip vectors of the planes (circles) and lines of intersection of every pair (squares). A line daylights when it plots beyond the face's great circle and can slide when it also lies inside the friction circle (φ = %.1f°); the darker zone is planar sliding within ±%g° of the face's dip direction, the paler one wedges. The blue sector is the flexural-toppling envelope. Filled symbols are feasible cases.", sl.FrictionAngle, sl.LateralLimit),
+			Caption: fmt.Sprintf("Lower-hemisphere equal-area net of lines: dip vectors of the planes (circles) and lines of intersection of every pair (squares). A line daylights when it plots beyond the face's great circle and can slide when it also lies inside the friction circle (φ = %.1f°); the darker zone is planar sliding within ±%g° of the face's dip direction, the paler one wedges. The blue sector is the flexural-toppling envelope. Red and blue symbols are feasible cases; grey ones say which condition fails (open: does not daylight; light: flatter than φ; dark: beyond the lateral limit).", sl.FrictionAngle, sl.LateralLimit),
 			Figure:  a.kinematicNet(a.slope), W: cm(0, 19), H: cm(0, 13.5)}})
 	}
 	return figs

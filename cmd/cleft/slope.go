@@ -270,9 +270,9 @@ func (a *assessment) kinematicNet(sc *slopeScreen) *plots.KinematicNet {
 	for _, r := range sc.rows {
 		switch {
 		case r.test == "planar":
-			k.Items = append(k.Items, plots.KinItem{Name: r.planes, Line: r.line, Feasible: r.k.Feasible, Toppling: topple[r.planes]})
+			k.Items = append(k.Items, plots.KinItem{Name: r.planes, Line: r.line, Feasible: r.k.Feasible, Toppling: topple[r.planes], Fails: r.k.Fails})
 		case r.test == "wedge" && r.hasLine:
-			k.Items = append(k.Items, plots.KinItem{Name: r.planes, Line: r.line, Intersection: true, Feasible: r.k.Feasible})
+			k.Items = append(k.Items, plots.KinItem{Name: r.planes, Line: r.line, Intersection: true, Feasible: r.k.Feasible, Fails: r.k.Fails})
 		}
 	}
 	return k
