@@ -17,9 +17,6 @@ func NewState(total Tensor, z, pp, biot float64) State {
 	return State{Depth: z, Total: total, Principal: total.Principal(), PorePressure: pp, Biot: biot}
 }
 
-// Effective returns the effective tensor σ − α·Pp·I.
-func (s State) Effective() Tensor { return s.Total.Shift(s.Biot * s.PorePressure) }
-
 // EffectivePrincipal returns σ1', σ2', σ3' = σi − α·Pp.
 func (s State) EffectivePrincipal() [3]float64 {
 	p := s.Biot * s.PorePressure

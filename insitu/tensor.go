@@ -55,15 +55,6 @@ func (t Tensor) Apply(n r3.Vec) r3.Vec {
 // Trace returns σxx + σyy + σzz, three times the mean stress.
 func (t Tensor) Trace() float64 { return t.NN + t.EE + t.DD }
 
-// Shift returns t − p·I: the effective tensor for a pore pressure p (times
-// Biot's coefficient).
-func (t Tensor) Shift(p float64) Tensor {
-	t.NN -= p
-	t.EE -= p
-	t.DD -= p
-	return t
-}
-
 // Scale returns f·t.
 func (t Tensor) Scale(f float64) Tensor {
 	return Tensor{t.NN * f, t.EE * f, t.DD * f, t.NE * f, t.ND * f, t.ED * f}

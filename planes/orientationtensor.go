@@ -3,8 +3,6 @@ package planes
 import (
 	"math"
 
-	"cleft/insitu"
-
 	"gonum.org/v1/gonum/mat"
 	"gonum.org/v1/gonum/spatial/r3"
 )
@@ -67,9 +65,6 @@ func OrientationTensor(normals []r3.Vec, weights []float64) Eigen {
 	}
 	return out
 }
-
-// Axis returns eigenvector i as a lower-hemisphere line.
-func (e Eigen) Axis(i int) insitu.Line { return insitu.LineOf(e.Axes[i]) }
 
 // WoodcockK returns Woodcock's (1977) shape parameter K = ln(S1/S2)/ln(S2/S3):
 // K > 1 for clusters, K < 1 for girdles. It is NaN when S2 = S3 (a perfect

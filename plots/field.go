@@ -91,9 +91,3 @@ func (f *Field) orientation(p Projection, i, j int) planes.Orientation {
 	}
 	return o
 }
-
-// At returns the orientation and value of node (i, j): the field's own
-// record of what it evaluated, for tests and readers.
-func (f *Field) At(p Projection, i, j int) (planes.Orientation, float64) {
-	return f.orientation(p, i, j), f.Values[j*f.N+i]
-}

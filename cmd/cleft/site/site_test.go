@@ -4,6 +4,7 @@ import (
 	"math"
 	"strings"
 	"testing"
+	"testing/fstest"
 
 	"cleft/insitu"
 	"cleft/planes"
@@ -104,5 +105,49 @@ func TestPlanesFileRelativeToSite(t *testing.T) {
 	}
 	if s.PlanesFile != "some/dir/joints.csv" {
 		t.Errorf("planes_file resolved to %q", s.PlanesFile)
+	}
+}
+
+func TestSetsBlock(t *testing.T) {
+	s, err := Parse([]byte(minimal+`readings_file: r.csv
+sets: {seeds: ["70/135", "20/250"], max_angle: 25, line: "100/70", max_weight: 5}
+`), "d/s.yaml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	c := s.Sets
+	if s.ReadingsFile != "d/r.csv" || len(c.Seeds) != 2 || c.Seeds[1].DipDirection != 250 || c.MaxAngle != 25 || c.Line == nil || c.Line.Plunge != 70 || c.MaxWeight != 5 {
+		t.Errorf("sets %+v, readings %q", c, s.ReadingsFile)
+	}
+	for _, bad := range []struct{ sets, want string }{
+		{`{count: 3, seeds: ["70/135"]}`, "1 seeds for count: 3"},
+		{`{count: 2.5}`, "want a whole number of sets"},
+		{`{line: "east"}`, "want TREND/PLUNGE"},
+		{`{seeds: ["95/10"]}`, "dip 95 is outside"},
+		{`{max_weight: 0.5}`, "0.5 is outside the allowed range [1, 1000]"},
+	} {
+		_, err := Parse([]byte(minimal+"readings_file: r.csv\nsets: "+bad.sets+"\n"), "s.yaml")
+		if err == nil || !strings.Contains(err.Error(), bad.want) {
+			t.Errorf("sets: %s: %v, want %q", bad.sets, err, bad.want)
+		}
+	}
+}
+
+func TestCoverFile(t *testing.T) {
+	fsys := fstest.MapFS{
+		"s.yaml":       {Data: []byte(minimal + "tunnel:\n  alignment: [{from: 0, to: 100, trend: 10}]\n  cover_file: cover.csv\n  rock: {ucs: 50}\n")},
+		"cover.csv":    {Data: []byte("# profile\nchainage,cover\n0,5\n100,45\n")},
+		"bad.yaml":     {Data: []byte(minimal + "tunnel:\n  alignment: [{from: 0, to: 100, trend: 10}]\n  cover_file: badcover.csv\n  rock: {ucs: 50}\n")},
+		"badcover.csv": {Data: []byte("chainage,cover\n0,5\n50,-3\n")},
+	}
+	s, err := ParseFS(fsys, "s.yaml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	if c, ok := s.Tunnel.CoverAt(25); !ok || c != 15 {
+		t.Errorf("cover at 25 m = %v, %v; want 15", c, ok)
+	}
+	if _, err := ParseFS(fsys, "bad.yaml"); err == nil || !strings.Contains(err.Error(), "badcover.csv:3: cover: \"-3\": want a number ≥ 0") {
+		t.Errorf("bad cover file: %v", err)
 	}
 }
