@@ -5,7 +5,6 @@ import (
 	"fmt"
 	"io"
 	"math"
-	"path/filepath"
 	"sort"
 	"strings"
 
@@ -91,65 +90,42 @@ func runAssess(o assessOptions, stdout io.Writer) error {
 		return err
 	}
 	var wrote []string
-	for _, f := range []struct {
-		name  string
-		write func(io.Writer) error
-	}{
+	tables := []namedTable{
 		{"planes.csv", func(w io.Writer) error { return a.writeTable(w, table.CSV) }},
 		{"planes.json", func(w io.Writer) error { return a.writeTable(w, table.JSON) }},
 		{"stress.json", func(w io.Writer) error {
 			return writeJSON(w, stressDoc{Site: s.Name, Model: s.Summary(), Notes: s.Notes, States: a.states})
 		}},
-	} {
-		path := filepath.Join(o.out, f.name)
-		if err := writeFile(path, f.write); err != nil {
-			return err
-		}
-		wrote = append(wrote, path)
+	}
+	if err := writeTables(o.out, tables, &wrote); err != nil {
+		return err
 	}
 	figs := a.figures()
-	for _, f := range figs {
-		for _, ext := range []string{".svg", ".png"} {
-			path := filepath.Join(o.out, f.file+ext)
-			if err := writeFigure(f.Figure, f.W, f.H, path); err != nil {
-				return err
-			}
-			wrote = append(wrote, path)
-		}
+	if err := writeFigures(o.out, figs, &wrote); err != nil {
+		return err
 	}
+	var more []namedTable
 	if a.tunnel != nil {
-		if err := a.writeTunnel(o.out, a.tunnel.worst(), &wrote, false); err != nil {
-			return err
-		}
+		more = append(more, a.tunnel.tables()...)
 	}
 	if a.slope != nil {
-		if err := writeFile(filepath.Join(o.out, "slope.csv"), a.slope.write); err != nil {
-			return err
-		}
-		wrote = append(wrote, filepath.Join(o.out, "slope.csv"))
+		more = append(more, namedTable{"slope.csv", a.slope.write})
 	}
 	if a.grouping != nil {
-		if err := writeFile(filepath.Join(o.out, "sets.csv"), a.writeSets); err != nil {
-			return err
-		}
-		wrote = append(wrote, filepath.Join(o.out, "sets.csv"))
+		more = append(more, namedTable{"sets.csv", a.writeSets})
+	}
+	if err := writeTables(o.out, more, &wrote); err != nil {
+		return err
 	}
 	rep, err := a.report(o.example, figs)
 	if err != nil {
 		return err
 	}
-	for _, f := range []struct {
-		name  string
-		write func(io.Writer) error
-	}{
+	if err := writeTables(o.out, []namedTable{
 		{"report.html", rep.WriteHTML},
 		{"summary.json", func(w io.Writer) error { return writeJSON(w, a.facts()) }},
-	} {
-		path := filepath.Join(o.out, f.name)
-		if err := writeFile(path, f.write); err != nil {
-			return err
-		}
-		wrote = append(wrote, path)
+	}, &wrote); err != nil {
+		return err
 	}
 	var b strings.Builder
 	a.summary(&b)
@@ -161,11 +137,7 @@ func runAssess(o assessOptions, stdout io.Writer) error {
 		b.WriteString("\n")
 		a.tunnel.summary(&b)
 	}
-	names := make([]string, len(wrote))
-	for i, w := range wrote {
-		names[i] = filepath.Base(w)
-	}
-	fmt.Fprintf(&b, "\nWrote %d files to %s: %s.\n\n%s\n", len(wrote), o.out, strings.Join(names, ", "), caution)
+	fmt.Fprintf(&b, "\nWrote %d files to %s: %s.\n\n%s\n", len(wrote), o.out, strings.Join(baseNames(wrote), ", "), caution)
 	_, err = io.WriteString(stdout, b.String())
 	return err
 }
@@ -298,4 +270,17 @@ func wrap(text string, width int) string {
 		n += l
 	}
 	return b.String()
+}
+
+// assessFor loads and assesses the site at path, which must have the block
+// a command screens (has); missing says what to give when it does not.
+func assessFor(path string, has func(*site.Site) bool, missing string) (*assessment, error) {
+	s, err := site.Load(path)
+	if err != nil {
+		return nil, err
+	}
+	if !has(s) {
+		return nil, &site.Error{File: s.File, Msg: missing}
+	}
+	return assess(s)
 }

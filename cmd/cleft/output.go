@@ -58,3 +58,50 @@ func writeCSV(w io.Writer, rows [][]string) error {
 	}
 	return cw.Error()
 }
+
+// namedTable is an output file and the function that writes it.
+type namedTable struct {
+	name  string
+	write func(io.Writer) error
+}
+
+// writeTables writes each table into dir; wrote, if not nil, collects the
+// paths.
+func writeTables(dir string, ts []namedTable, wrote *[]string) error {
+	for _, t := range ts {
+		p := filepath.Join(dir, t.name)
+		if err := writeFile(p, t.write); err != nil {
+			return err
+		}
+		if wrote != nil {
+			*wrote = append(*wrote, p)
+		}
+	}
+	return nil
+}
+
+// writeFigures writes each figure into dir as SVG and PNG; wrote, if not
+// nil, collects the paths.
+func writeFigures(dir string, figs []namedFigure, wrote *[]string) error {
+	for _, f := range figs {
+		for _, ext := range []string{".svg", ".png"} {
+			p := filepath.Join(dir, f.file+ext)
+			if err := writeFigure(f.Figure, f.W, f.H, p); err != nil {
+				return err
+			}
+			if wrote != nil {
+				*wrote = append(*wrote, p)
+			}
+		}
+	}
+	return nil
+}
+
+// baseNames returns the file names of paths.
+func baseNames(paths []string) []string {
+	out := make([]string, len(paths))
+	for i, p := range paths {
+		out[i] = filepath.Base(p)
+	}
+	return out
+}

@@ -109,22 +109,32 @@ func (a *assessment) figures() []namedFigure {
 			Figure:  a.mohr(fo), W: cm(0, 17), H: cm(0, 12)}},
 	}
 	if g := a.grouping; g != nil {
-		figs = append(figs, namedFigure{"sets-density", plots.ReportFigure{
-			Title:   fmt.Sprintf("Pole density of the %d field readings and their %d sets", len(g.readings), len(g.an.Sets)),
-			Caption: "Kamb (1959) counting of the poles (weighted where the readings are), in multiples of σ: a uniform scatter reads 3σ. Dots are poles of readings in a set, rings unassigned readings; each set mean is shown with its 95 % confidence cone (α95, Fisher 1953). " + g.explain(),
-			Figure:  g.densityNet(a.site.Name, plots.EqualArea), W: cm(0, 19), H: cm(0, 13.5)}})
+		figs = append(figs, g.densityFigure(a.site.Name, plots.EqualArea))
 	}
 	if a.tunnel != nil {
 		figs = append(figs, a.tunnelFigures(a.tunnel.worst())...)
 	}
 	if a.slope != nil {
-		sl := a.site.Slope
-		figs = append(figs, namedFigure{"slope-kinematic", plots.ReportFigure{
-			Title:   fmt.Sprintf("Kinematic screening of the %s face", sl.Face),
-			Caption: fmt.Sprintf("Lower-hemisphere equal-area net of lines: dip vectors of the planes (circles) and lines of intersection of every pair (squares). A line daylights when it plots beyond the face's great circle and can slide when it also lies inside the friction circle (φ = %.1f°); the darker zone is planar sliding within ±%g° of the face's dip direction, the paler one wedges. The blue sector is the flexural-toppling envelope. Red and blue symbols are feasible cases; grey ones say which condition fails (open: does not daylight; light: flatter than φ; dark: beyond the lateral limit).", sl.FrictionAngle, sl.LateralLimit),
-			Figure:  a.kinematicNet(a.slope), W: cm(0, 19), H: cm(0, 13.5)}})
+		figs = append(figs, a.slopeFigure())
 	}
 	return figs
+}
+
+// densityFigure is the pole-density stereonet of the readings, named site.
+func (g *grouping) densityFigure(site string, proj plots.Projection) namedFigure {
+	return namedFigure{"sets-density", plots.ReportFigure{
+		Title:   fmt.Sprintf("Pole density of the %d field readings and their %d sets", len(g.readings), len(g.an.Sets)),
+		Caption: "Kamb (1959) counting of the poles (weighted where the readings are), in multiples of σ: a uniform scatter reads 3σ. Dots are poles of readings in a set, rings unassigned readings; each set mean is shown with its 95 % confidence cone (α95, Fisher 1953). " + g.explain(),
+		Figure:  g.densityNet(site, proj), W: cm(0, 19), H: cm(0, 13.5)}}
+}
+
+// slopeFigure is the kinematic stereonet of the slope screening.
+func (a *assessment) slopeFigure() namedFigure {
+	sl := a.site.Slope
+	return namedFigure{"slope-kinematic", plots.ReportFigure{
+		Title:   fmt.Sprintf("Kinematic screening of the %s face", sl.Face),
+		Caption: fmt.Sprintf("Lower-hemisphere equal-area net of lines: dip vectors of the planes (circles) and lines of intersection of every pair (squares). A line daylights when it plots beyond the face's great circle and can slide when it also lies inside the friction circle (φ = %.1f°); the darker zone is planar sliding within ±%g° of the face's dip direction, the paler one wedges. The blue sector is the flexural-toppling envelope. Red and blue symbols are feasible cases; grey ones say which condition fails (open: does not daylight; light: flatter than φ; dark: beyond the lateral limit).", sl.FrictionAngle, sl.LateralLimit),
+		Figure:  a.kinematicNet(a.slope), W: cm(0, 19), H: cm(0, 13.5)}}
 }
 
 func traceNote(a *assessment) string {

@@ -312,24 +312,15 @@ func runSets(o setsOptions, stdin io.Reader, stdout io.Writer) error {
 			return err
 		}
 		var wrote []string
-		for _, f := range []struct {
-			name  string
-			write func(io.Writer) error
-		}{{"sets.csv", g.writeSets}, {"readings.csv", g.writeReadings}} {
-			if err := writeFile(filepath.Join(o.out, f.name), f.write); err != nil {
-				return err
-			}
-			wrote = append(wrote, f.name)
+		if err := writeTables(o.out, []namedTable{{"sets.csv", g.writeSets}, {"readings.csv", g.writeReadings}}, &wrote); err != nil {
+			return err
 		}
-		d := g.densityNet(filepath.Base(o.readings), proj)
-		for _, ext := range []string{".svg", ".png"} {
-			if err := writeFigure(d, cm(0, 19), cm(0, 13.5), filepath.Join(o.out, "sets-density"+ext)); err != nil {
-				return err
-			}
-			wrote = append(wrote, "sets-density"+ext)
+		if err := writeFigures(o.out, []namedFigure{g.densityFigure(filepath.Base(o.readings), proj)}, &wrote); err != nil {
+			return err
 		}
-		sort.Strings(wrote)
-		fmt.Fprintf(&b, "\nWrote %s to %s.\n", strings.Join(wrote, ", "), o.out)
+		names := baseNames(wrote)
+		sort.Strings(names)
+		fmt.Fprintf(&b, "\nWrote %s to %s.\n", strings.Join(names, ", "), o.out)
 	}
 	_, err = io.WriteString(stdout, b.String())
 	return err

@@ -4,7 +4,6 @@ import (
 	"fmt"
 	"io"
 	"math"
-	"path/filepath"
 	"strconv"
 	"strings"
 
@@ -215,14 +214,7 @@ func (sc *slopeScreen) summary(b *strings.Builder) {
 }
 
 func runSlope(o slopeOptions, stdout io.Writer) error {
-	s, err := site.Load(o.site)
-	if err != nil {
-		return err
-	}
-	if s.Slope == nil {
-		return &site.Error{File: s.File, Msg: "no slope: block: give the face, height and the rest (see README, Rock slopes)"}
-	}
-	a, err := assess(s) // screens the slope too
+	a, err := assessFor(o.site, func(s *site.Site) bool { return s.Slope != nil }, "no slope: block: give the face, height and the rest (see README, Rock slopes)")
 	if err != nil {
 		return err
 	}
@@ -233,16 +225,14 @@ func runSlope(o slopeOptions, stdout io.Writer) error {
 		if err := makeDir(o.out); err != nil {
 			return err
 		}
-		if err := writeFile(filepath.Join(o.out, "slope.csv"), sc.write); err != nil {
+		var wrote []string
+		if err := writeTables(o.out, []namedTable{{"slope.csv", sc.write}}, &wrote); err != nil {
 			return err
 		}
-		k := a.kinematicNet(sc)
-		for _, ext := range []string{".svg", ".png"} {
-			if err := writeFigure(k, cm(0, 19), cm(0, 13.5), filepath.Join(o.out, "slope-kinematic"+ext)); err != nil {
-				return err
-			}
+		if err := writeFigures(o.out, []namedFigure{a.slopeFigure()}, &wrote); err != nil {
+			return err
 		}
-		fmt.Fprintf(&b, "\nWrote slope.csv, slope-kinematic.svg, slope-kinematic.png to %s.\n", o.out)
+		fmt.Fprintf(&b, "\nWrote %s to %s.\n", strings.Join(baseNames(wrote), ", "), o.out)
 	}
 	fmt.Fprintf(&b, "\n%s\n", caution)
 	_, err = io.WriteString(stdout, b.String())

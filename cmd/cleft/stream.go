@@ -34,7 +34,7 @@ func streamTable(s *site.Site, ps *site.PlaneStream, f table.Format, w io.Writer
 	inflight := 2*workers + 1
 	free := make(chan *batch, inflight)
 	for range inflight {
-		free <- &batch{planes: make([]site.Plane, batchSize), done: make(chan struct{})}
+		free <- &batch{planes: make([]site.Plane, batchSize)}
 	}
 	work := make(chan *batch, inflight)
 	order := make(chan *batch, inflight)

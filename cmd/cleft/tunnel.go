@@ -4,7 +4,6 @@ import (
 	"fmt"
 	"io"
 	"math"
-	"path/filepath"
 	"strings"
 
 	"cleft/cmd/cleft/site"
@@ -338,14 +337,7 @@ func (sc *tunnelScreen) summary(b *strings.Builder) {
 }
 
 func runTunnel(o tunnelOptions, stdout io.Writer) error {
-	s, err := site.Load(o.site)
-	if err != nil {
-		return err
-	}
-	if s.Tunnel == nil {
-		return &site.Error{File: s.File, Msg: "no tunnel: block: give the alignment, cover and rock (see README, Tunnels)"}
-	}
-	a, err := assess(s)
+	a, err := assessFor(o.site, func(s *site.Site) bool { return s.Tunnel != nil }, "no tunnel: block: give the alignment, cover and rock (see README, Tunnels)")
 	if err != nil {
 		return err
 	}
@@ -362,7 +354,10 @@ func runTunnel(o tunnelOptions, stdout io.Writer) error {
 		if err := makeDir(o.out); err != nil {
 			return err
 		}
-		if err := a.writeTunnel(o.out, idx, nil, true); err != nil {
+		if err := writeTables(o.out, sc.tables(), nil); err != nil {
+			return err
+		}
+		if err := writeFigures(o.out, a.tunnelFigures(idx), nil); err != nil {
 			return err
 		}
 		fmt.Fprintf(&b, "\nWrote stations.csv, wall.csv, profile.csv, tunnel-profile.svg/.png, tunnel-wall.svg/.png to %s.\n", o.out)
@@ -389,38 +384,9 @@ func (sc *tunnelScreen) stationAt(ch float64) int {
 	return -1
 }
 
-// writeTunnel writes the tables, and the figures when figures is true (assess
-// writes its figures with the others), into dir; wrote, if not nil, collects
-// the paths.
-func (a *assessment) writeTunnel(dir string, station int, wrote *[]string, figures bool) error {
-	sc := a.tunnel
-	for _, f := range []struct {
-		name  string
-		write func(io.Writer) error
-	}{{"stations.csv", sc.writeStations}, {"wall.csv", sc.writeWall}, {"profile.csv", sc.writeProfile}} {
-		p := filepath.Join(dir, f.name)
-		if err := writeFile(p, f.write); err != nil {
-			return err
-		}
-		if wrote != nil {
-			*wrote = append(*wrote, p)
-		}
-	}
-	if !figures {
-		return nil
-	}
-	for _, f := range a.tunnelFigures(station) {
-		for _, ext := range []string{".svg", ".png"} {
-			p := filepath.Join(dir, f.file+ext)
-			if err := writeFigure(f.Figure, f.W, f.H, p); err != nil {
-				return err
-			}
-			if wrote != nil {
-				*wrote = append(*wrote, p)
-			}
-		}
-	}
-	return nil
+// tables are the tunnel's output tables.
+func (sc *tunnelScreen) tables() []namedTable {
+	return []namedTable{{"stations.csv", sc.writeStations}, {"wall.csv", sc.writeWall}, {"profile.csv", sc.writeProfile}}
 }
 
 // tunnelFigures are the along-alignment chart and the perimeter plot of
