@@ -1,6 +1,10 @@
 package insitu
 
-import "math"
+import (
+	"math"
+
+	"cleft/insitu/geom"
+)
 
 // FrictionalLimit returns the largest effective principal stress ratio that
 // a crust with optimally oriented faults of friction μ can sustain (Jaeger &
@@ -18,7 +22,7 @@ func FrictionalLimit(mu float64) float64 {
 // prone to slip for friction μ: ½·atan(1/μ) (29.5° for μ = 0.6). The plane's
 // normal lies in the σ1–σ3 plane at 90° minus this angle from σ1.
 func OptimalAngle(mu float64) float64 {
-	return 0.5 * math.Atan(1/mu) * deg
+	return 0.5 * math.Atan(1/mu) * geom.Deg
 }
 
 // EffectiveRatio returns (σ1 − αPp)/(σ3 − αPp) for the state. It returns +Inf

@@ -1,6 +1,10 @@
 package insitu
 
-import "fmt"
+import (
+	"fmt"
+
+	"cleft/insitu/geom"
+)
 
 // HorizontalKind says how a horizontal principal stress grows with depth.
 type HorizontalKind int
@@ -106,7 +110,7 @@ func NewGradientModel(gv float64, shmax, shmin Horizontal, azimuth float64, w Wa
 	if err := w.Validate(); err != nil {
 		return nil, fmt.Errorf("water: %w", err)
 	}
-	return &GradientModel{VerticalGradient: gv, SHmax: shmax, Shmin: shmin, Azimuth: Azimuth(azimuth), Water: w}, nil
+	return &GradientModel{VerticalGradient: gv, SHmax: shmax, Shmin: shmin, Azimuth: geom.Azimuth(azimuth), Water: w}, nil
 }
 
 // Magnitudes returns SHmax, Shmin and Sv at depth z (m), MPa.
@@ -121,7 +125,7 @@ func (m *GradientModel) Magnitudes(z float64) (shmax, shmin, sv float64) {
 // the one the laws give, and the principal stresses are sorted as always.
 func (m *GradientModel) At(z float64) State {
 	sh, sm, sv := m.Magnitudes(z)
-	st, ct := SinCosDeg(m.Azimuth)
+	st, ct := geom.SinCosDeg(m.Azimuth)
 	p := Principal{
 		Values: [3]float64{sh, sm, sv},
 	}

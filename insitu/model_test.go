@@ -1,6 +1,8 @@
 package insitu
 
 import (
+	"cleft/insitu/geom"
+
 	"math"
 	"testing"
 
@@ -63,7 +65,7 @@ func TestGradientModel(t *testing.T) {
 	}
 	ref := s.Total.Principal()
 	for i := range 3 {
-		if !scalar.EqualWithinAbs(s.Principal.Values[i], ref.Values[i], 1e-9) || AxialAngle(s.Principal.Axes[i], ref.Axes[i]) > 1e-6 {
+		if !scalar.EqualWithinAbs(s.Principal.Values[i], ref.Values[i], 1e-9) || geom.AxialAngle(s.Principal.Axes[i], ref.Axes[i]) > 1e-6 {
 			t.Errorf("principal %d = %v %v, want %v %v", i, s.Principal.Values[i], s.Principal.Axis(i), ref.Values[i], ref.Axis(i))
 		}
 	}

@@ -1,6 +1,8 @@
 package insitu
 
 import (
+	"cleft/insitu/geom"
+
 	"fmt"
 	"math"
 	"sort"
@@ -19,11 +21,11 @@ type Principal struct {
 
 // Axis returns the lower-hemisphere trend and plunge of principal axis i
 // (0 for σ1, 1 for σ2, 2 for σ3).
-func (p Principal) Axis(i int) Line {
+func (p Principal) Axis(i int) geom.Line {
 	if i < 0 || i > 2 {
 		panic(fmt.Sprintf("insitu: principal axis index %d out of range [0, 2]", i))
 	}
-	return LineOf(p.Axes[i])
+	return geom.LineOf(p.Axes[i])
 }
 
 // Tensor returns the stress tensor with these principal values and axes:
@@ -86,7 +88,7 @@ const MaxAxisMisfit = 2.0
 // orthogonal triad (the polar factor of the matrix of axes, which treats the
 // three alike) and the correction is reported in AxisFit; a larger misfit is
 // an error.
-func FromPrincipal(mags [3]float64, axes [3]Line) (Principal, AxisFit, error) {
+func FromPrincipal(mags [3]float64, axes [3]geom.Line) (Principal, AxisFit, error) {
 	var fit AxisFit
 	var v [3]r3.Vec
 	for i, a := range axes {
@@ -100,7 +102,7 @@ func FromPrincipal(mags [3]float64, axes [3]Line) (Principal, AxisFit, error) {
 	}
 	for i := range 3 {
 		for j := i + 1; j < 3; j++ {
-			d := math.Abs(90 - Angle(v[i], v[j]))
+			d := math.Abs(90 - geom.Angle(v[i], v[j]))
 			fit.Misfit = math.Max(fit.Misfit, d)
 		}
 	}
@@ -109,7 +111,7 @@ func FromPrincipal(mags [3]float64, axes [3]Line) (Principal, AxisFit, error) {
 	}
 	o := orthogonalise(v)
 	for i := range 3 {
-		fit.Moved = math.Max(fit.Moved, Angle(v[i], o[i]))
+		fit.Moved = math.Max(fit.Moved, geom.Angle(v[i], o[i]))
 	}
 	idx := []int{0, 1, 2}
 	sort.SliceStable(idx, func(a, b int) bool { return mags[idx[a]] > mags[idx[b]] })

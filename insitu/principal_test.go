@@ -1,6 +1,8 @@
 package insitu
 
 import (
+	"cleft/insitu/geom"
+
 	"testing"
 
 	"gonum.org/v1/gonum/floats/scalar"
@@ -8,7 +10,7 @@ import (
 
 func TestFromPrincipal(t *testing.T) {
 	t.Run("orthogonal axes kept, order sorted", func(t *testing.T) {
-		p, fit, err := FromPrincipal([3]float64{20, 35, 12}, [3]Line{{90, 0}, {0, 0}, {0, 90}})
+		p, fit, err := FromPrincipal([3]float64{20, 35, 12}, [3]geom.Line{{Trend: 90, Plunge: 0}, {Trend: 0, Plunge: 0}, {Trend: 0, Plunge: 90}})
 		if err != nil {
 			t.Fatal(err)
 		}
@@ -18,12 +20,12 @@ func TestFromPrincipal(t *testing.T) {
 		if p.Values != [3]float64{35, 20, 12} {
 			t.Errorf("values = %v", p.Values)
 		}
-		if a := p.Axis(0); AxialAngle(a.Vec(), Line{0, 0}.Vec()) > 1e-9 {
+		if a := p.Axis(0); geom.AxialAngle(a.Vec(), geom.Line{Trend: 0, Plunge: 0}.Vec()) > 1e-9 {
 			t.Errorf("σ1 axis = %v, want 000/00", a)
 		}
 	})
 	t.Run("small misfit corrected and reported", func(t *testing.T) {
-		_, fit, err := FromPrincipal([3]float64{30, 20, 10}, [3]Line{{91.5, 0}, {0, 0}, {0, 90}})
+		_, fit, err := FromPrincipal([3]float64{30, 20, 10}, [3]geom.Line{{Trend: 91.5, Plunge: 0}, {Trend: 0, Plunge: 0}, {Trend: 0, Plunge: 90}})
 		if err != nil {
 			t.Fatal(err)
 		}
@@ -32,7 +34,7 @@ func TestFromPrincipal(t *testing.T) {
 		}
 	})
 	t.Run("large misfit rejected", func(t *testing.T) {
-		if _, _, err := FromPrincipal([3]float64{30, 20, 10}, [3]Line{{95, 0}, {0, 0}, {0, 90}}); err == nil {
+		if _, _, err := FromPrincipal([3]float64{30, 20, 10}, [3]geom.Line{{Trend: 95, Plunge: 0}, {Trend: 0, Plunge: 0}, {Trend: 0, Plunge: 90}}); err == nil {
 			t.Error("5° misfit accepted")
 		}
 	})
@@ -78,7 +80,7 @@ func TestRegimeAndAPhi(t *testing.T) {
 		})
 	}
 	t.Run("tilted state names the nearest vertical axis", func(t *testing.T) {
-		p, _, err := FromPrincipal([3]float64{50, 30, 20}, [3]Line{{40, 70}, {220, 20}, {130, 0}})
+		p, _, err := FromPrincipal([3]float64{50, 30, 20}, [3]geom.Line{{Trend: 40, Plunge: 70}, {Trend: 220, Plunge: 20}, {Trend: 130, Plunge: 0}})
 		if err != nil {
 			t.Fatal(err)
 		}

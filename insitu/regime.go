@@ -1,6 +1,8 @@
 package insitu
 
 import (
+	"cleft/insitu/geom"
+
 	"fmt"
 	"math"
 )
@@ -56,7 +58,7 @@ func (f RegimeFit) Andersonian() bool { return f.Tilt <= AndersonTilt }
 func (p Principal) Regime() RegimeFit {
 	best, tilt := 0, 90.0
 	for i, a := range p.Axes {
-		t := 90 - math.Asin(math.Min(1, math.Abs(a.Z)))*deg
+		t := 90 - math.Asin(math.Min(1, math.Abs(a.Z)))*geom.Deg
 		if t < tilt {
 			best, tilt = i, t
 		}

@@ -1,6 +1,8 @@
 package insitu
 
 import (
+	"cleft/insitu/geom"
+
 	"fmt"
 	"math"
 
@@ -34,7 +36,7 @@ var componentNames = [6]string{"nn", "ee", "dd", "ne", "nd", "ed"}
 //
 //	σ = SHmax·h hᵀ + Shmin·m mᵀ + Sv·z zᵀ,  h = (cos az, sin az, 0), m = (−sin az, cos az, 0)
 func Andersonian(shmax, shmin, sv, az float64) Tensor {
-	s, c := SinCosDeg(az)
+	s, c := geom.SinCosDeg(az)
 	return Tensor{
 		NN: shmax*c*c + shmin*s*s,
 		EE: shmax*s*s + shmin*c*c,
@@ -83,27 +85,13 @@ func (t Tensor) Sym() *mat.SymDense {
 }
 
 // Principal returns the principal stresses of t, σ1 ≥ σ2 ≥ σ3, with their
-// axes. It uses gonum's mat.EigenSym, whose eigenvalues come in ascending
-// order; the order is reversed here. Principal allocates: call it once per
-// state, not once per plane.
+// axes as a right-handed triad (geom.EigenDescending). Principal allocates:
+// call it once per state, not once per plane.
 func (t Tensor) Principal() Principal {
-	var e mat.EigenSym
-	if !e.Factorize(t.Sym(), true) {
-		// EigenSym fails only for non-finite input, which Components rejects.
+	v, a, ok := geom.EigenDescending(geom.Sym3{XX: t.NN, YY: t.EE, ZZ: t.DD, XY: t.NE, XZ: t.ND, YZ: t.ED})
+	if !ok {
+		// The decomposition fails only for non-finite input, which Components rejects.
 		panic("insitu: eigen decomposition failed for a non-finite tensor")
 	}
-	vals := e.Values(nil)
-	var vecs mat.Dense
-	e.VectorsTo(&vecs)
-	var p Principal
-	for i := range 3 {
-		j := 2 - i
-		p.Values[i] = vals[j]
-		p.Axes[i] = r3.Vec{X: vecs.At(0, j), Y: vecs.At(1, j), Z: vecs.At(2, j)}
-	}
-	// Keep the triad right-handed, so it is a proper rotation.
-	if r3.Dot(r3.Cross(p.Axes[0], p.Axes[1]), p.Axes[2]) < 0 {
-		p.Axes[2] = r3.Scale(-1, p.Axes[2])
-	}
-	return p
+	return Principal{Values: v, Axes: a}
 }

@@ -1,6 +1,8 @@
 package insitu
 
 import (
+	"cleft/insitu/geom"
+
 	"math"
 	"math/rand/v2"
 	"testing"
@@ -104,7 +106,7 @@ func TestAndersonianAxes(t *testing.T) {
 	for _, az := range []float64{0, 30, 90, 135, 359.5} {
 		s := Andersonian(60, 40, 45, az)
 		p := s.Principal()
-		if a := p.Axis(0); a.Plunge > 1e-9 || AxialAngle(a.Vec(), Line{az, 0}.Vec()) > 1e-7 {
+		if a := p.Axis(0); a.Plunge > 1e-9 || geom.AxialAngle(a.Vec(), geom.Line{Trend: az, Plunge: 0}.Vec()) > 1e-7 {
 			t.Errorf("az %v: σ1 axis %v, want horizontal along %v", az, a, az)
 		}
 		if a := p.Axis(1); !scalar.EqualWithinAbs(a.Plunge, 90, 1e-7) {

@@ -1,8 +1,6 @@
 package planes
 
-import (
-	"cleft/insitu"
-)
+import "cleft/insitu/geom"
 
 // DriveClass is the rating of a discontinuity's orientation against the
 // drive of a tunnel in Bieniawski's (1989) orientation adjustment for RMR
@@ -44,7 +42,7 @@ func ClassifyDrive(o Orientation, trend float64) DriveClass {
 		}
 		return c
 	}
-	_, cos := insitu.SinCosDeg(trend - o.DipDirection)
+	_, cos := geom.SinCosDeg(trend - o.DipDirection)
 	with := cos > 0
 	switch {
 	case with && steep:

@@ -1,9 +1,8 @@
 package planes
 
 import (
+	"cleft/insitu/geom"
 	"math"
-
-	"cleft/insitu"
 
 	"gonum.org/v1/gonum/spatial/r3"
 )
@@ -22,7 +21,7 @@ type FisherStats struct {
 }
 
 // MeanPole returns the mean as a lower-hemisphere line.
-func (f FisherStats) MeanPole() insitu.Line { return insitu.LineOf(f.Mean) }
+func (f FisherStats) MeanPole() geom.Line { return geom.LineOf(f.Mean) }
 
 // MeanPlane returns the plane whose pole is the mean axis.
 func (f FisherStats) MeanPlane() Orientation { return FromNormal(f.Mean) }

@@ -1,11 +1,10 @@
 package planes
 
 import (
+	"cleft/insitu/geom"
 	"fmt"
 	"math"
 	"strings"
-
-	"cleft/insitu"
 
 	"gonum.org/v1/gonum/spatial/r3"
 )
@@ -18,7 +17,7 @@ import (
 // It is negative along azimuths pointing up the dip (|β| > 90°), 0 along
 // the strike, and δ along the dip direction.
 func ApparentDip(o Orientation, az float64) float64 {
-	_, c := insitu.SinCosDeg(az - o.DipDirection)
+	_, c := geom.SinCosDeg(az - o.DipDirection)
 	if o.Dip == 90 {
 		switch {
 		case c > 0:
@@ -34,12 +33,12 @@ func ApparentDip(o Orientation, az float64) float64 {
 // Intersection returns the line of intersection of two planes, in the
 // lower hemisphere (the direction of n1 × n2), and false when the planes are
 // parallel (within 1e-9 rad).
-func Intersection(a, b Orientation) (insitu.Line, bool) {
+func Intersection(a, b Orientation) (geom.Line, bool) {
 	v := r3.Cross(a.Normal(), b.Normal())
 	if r3.Norm(v) < 1e-9 {
-		return insitu.Line{}, false
+		return geom.Line{}, false
 	}
-	return insitu.LineOf(v), true
+	return geom.LineOf(v), true
 }
 
 // azDiff returns the smallest angle in degrees, in [0, 180], between two
@@ -122,7 +121,7 @@ func PlanarSliding(p, f Orientation, phi, lateral float64) Kinematic {
 // steeply as phi. A feasible wedge slides on one plane alone when that
 // plane's dip direction lies between the line's trend and the face's dip
 // direction (Hoek & Bray 1981; Wyllie & Mah 2004), else on both.
-func WedgeSliding(a, b Orientation, na, nb string, f Orientation, phi float64) (insitu.Line, Kinematic) {
+func WedgeSliding(a, b Orientation, na, nb string, f Orientation, phi float64) (geom.Line, Kinematic) {
 	var k Kinematic
 	l, ok := Intersection(a, b)
 	if !ok {
@@ -131,7 +130,7 @@ func WedgeSliding(a, b Orientation, na, nb string, f Orientation, phi float64) (
 	}
 	// Of the two senses of a horizontal line, take the one towards the face.
 	if l.Plunge == 0 && azDiff(l.Trend, f.DipDirection) > 90 {
-		l.Trend = insitu.Azimuth(l.Trend + 180)
+		l.Trend = geom.Azimuth(l.Trend + 180)
 	}
 	if d := azDiff(l.Trend, f.DipDirection); d >= 90 {
 		k.Fails |= Daylight

@@ -1,12 +1,11 @@
 package planes
 
 import (
+	"cleft/insitu/geom"
 	"fmt"
 	"math"
 	"strconv"
 	"strings"
-
-	"cleft/insitu"
 
 	"gonum.org/v1/gonum/spatial/r3"
 )
@@ -35,7 +34,7 @@ func New(dip, dipDirection float64) (Orientation, error) {
 	if math.IsNaN(dipDirection) || dipDirection < 0 || dipDirection > 360 {
 		return Orientation{}, fmt.Errorf("dip direction %v is outside [0, 360]", dipDirection)
 	}
-	return build(dip, insitu.Azimuth(dipDirection)), nil
+	return build(dip, geom.Azimuth(dipDirection)), nil
 }
 
 // MustNew is New for values known to be valid; it panics otherwise.
@@ -48,8 +47,8 @@ func MustNew(dip, dipDirection float64) Orientation {
 }
 
 func build(dip, dd float64) Orientation {
-	sd, cd := insitu.SinCosDeg(dip)
-	sa, ca := insitu.SinCosDeg(dd)
+	sd, cd := geom.SinCosDeg(dip)
+	sa, ca := geom.SinCosDeg(dd)
 	return Orientation{
 		Dip:          dip,
 		DipDirection: dd,
@@ -69,7 +68,7 @@ func FromStrike(strike, dip float64) (Orientation, error) {
 	if math.IsNaN(dip) || dip < 0 || dip > 90 {
 		return Orientation{}, fmt.Errorf("dip %v is outside [0, 90]", dip)
 	}
-	return build(dip, insitu.Azimuth(strike+90)), nil
+	return build(dip, geom.Azimuth(strike+90)), nil
 }
 
 // FromPole returns the plane whose pole has the given trend ∈ [0, 360] and
@@ -81,13 +80,13 @@ func FromPole(trend, plunge float64) (Orientation, error) {
 	if math.IsNaN(plunge) || plunge < 0 || plunge > 90 {
 		return Orientation{}, fmt.Errorf("pole plunge %v is outside [0, 90]", plunge)
 	}
-	return build(90-plunge, insitu.Azimuth(trend+180)), nil
+	return build(90-plunge, geom.Azimuth(trend+180)), nil
 }
 
 // FromNormal returns the plane with normal n (either sense, non-zero).
 func FromNormal(n r3.Vec) Orientation {
-	l := insitu.LineOf(n)
-	return build(90-l.Plunge, insitu.Azimuth(l.Trend+180))
+	l := geom.LineOf(n)
+	return build(90-l.Plunge, geom.Azimuth(l.Trend+180))
 }
 
 // Parse reads "DIP/DIPDIRECTION", e.g. "65/120", with optional spaces.
@@ -118,12 +117,12 @@ func (o Orientation) Normal() r3.Vec { return o.pole }
 
 // Pole returns the trend and plunge of the lower-hemisphere pole:
 // trend = dip direction + 180, plunge = 90 − dip.
-func (o Orientation) Pole() insitu.Line {
-	return insitu.Line{Trend: insitu.Azimuth(o.DipDirection + 180), Plunge: 90 - o.Dip}
+func (o Orientation) Pole() geom.Line {
+	return geom.Line{Trend: geom.Azimuth(o.DipDirection + 180), Plunge: 90 - o.Dip}
 }
 
 // Strike returns the strike in [0, 360), right-hand rule: dip direction − 90.
-func (o Orientation) Strike() float64 { return insitu.Azimuth(o.DipDirection - 90) }
+func (o Orientation) Strike() float64 { return geom.Azimuth(o.DipDirection - 90) }
 
 // StrikeVec returns the horizontal unit vector along strike.
 func (o Orientation) StrikeVec() r3.Vec { return o.strike }
@@ -132,6 +131,6 @@ func (o Orientation) StrikeVec() r3.Vec { return o.strike }
 func (o Orientation) DownDip() r3.Vec { return r3.Scale(-1, o.updip) }
 
 // DipLine returns the trend and plunge of the line of steepest dip.
-func (o Orientation) DipLine() insitu.Line {
-	return insitu.Line{Trend: o.DipDirection, Plunge: o.Dip}
+func (o Orientation) DipLine() geom.Line {
+	return geom.Line{Trend: o.DipDirection, Plunge: o.Dip}
 }

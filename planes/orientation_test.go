@@ -1,10 +1,9 @@
 package planes
 
 import (
+	"cleft/insitu/geom"
 	"math"
 	"testing"
-
-	"cleft/insitu"
 
 	"gonum.org/v1/gonum/floats/scalar"
 	"gonum.org/v1/gonum/spatial/r3"
@@ -46,10 +45,10 @@ func TestOrientationFrames(t *testing.T) {
 			if c := r3.Cross(s, d); r3.Norm(r3.Sub(c, n)) > 1e-12 {
 				t.Fatalf("%v: strike × down-dip = %v, want the pole %v", o, c, n)
 			}
-			if p := o.Pole(); insitu.AxialAngle(p.Vec(), n) > 1e-9 {
+			if p := o.Pole(); geom.AxialAngle(p.Vec(), n) > 1e-9 {
 				t.Fatalf("%v: Pole() %v disagrees with Normal()", o, p)
 			}
-			if dl := o.DipLine(); insitu.Angle(dl.Vec(), d) > 1e-9 {
+			if dl := o.DipLine(); geom.Angle(dl.Vec(), d) > 1e-9 {
 				t.Fatalf("%v: DipLine() %v disagrees with DownDip()", o, dl)
 			}
 		}

@@ -1,9 +1,9 @@
 package planes
 
 import (
+	"cleft/insitu/geom"
 	"math"
 
-	"gonum.org/v1/gonum/mat"
 	"gonum.org/v1/gonum/spatial/r3"
 )
 
@@ -50,18 +50,13 @@ func OrientationTensor(normals []r3.Vec, weights []float64) Eigen {
 	for i := range t {
 		t[i] /= sw
 	}
-	var e mat.EigenSym
-	if !e.Factorize(mat.NewSymDense(3, []float64{t[0], t[3], t[4], t[3], t[1], t[5], t[4], t[5], t[2]}), true) {
+	v, a, ok := geom.EigenDescending(geom.Sym3{XX: t[0], YY: t[1], ZZ: t[2], XY: t[3], XZ: t[4], YZ: t[5]})
+	if !ok {
 		panic("planes: eigen decomposition of an orientation tensor failed")
 	}
-	vals := e.Values(nil)
-	var vecs mat.Dense
-	e.VectorsTo(&vecs)
-	var out Eigen
-	for i := range 3 { // ascending from gonum, descending here
-		j := 2 - i
-		out.Values[i] = math.Max(0, vals[j])
-		out.Axes[i] = r3.Vec{X: vecs.At(0, j), Y: vecs.At(1, j), Z: vecs.At(2, j)}
+	out := Eigen{Axes: a}
+	for i := range 3 {
+		out.Values[i] = math.Max(0, v[i])
 	}
 	return out
 }

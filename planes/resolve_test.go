@@ -6,6 +6,7 @@ import (
 	"testing"
 
 	"cleft/insitu"
+	"cleft/insitu/geom"
 
 	"gonum.org/v1/gonum/floats/scalar"
 	"gonum.org/v1/gonum/spatial/r3"
@@ -52,7 +53,7 @@ func TestMohrCircle2D(t *testing.T) {
 	s1, s2, s3 := 50.0, 30.0, 10.0
 	s := dryState(insitu.Andersonian(s1, s3, s2, 0))
 	for beta := 0.0; beta <= 90; beta += 7.5 {
-		o := MustNew(90, insitu.Azimuth(beta+180)) // pole trend β, horizontal
+		o := MustNew(90, geom.Azimuth(beta+180)) // pole trend β, horizontal
 		r := Resolve(s, o, mu06)
 		b := beta * math.Pi / 180
 		wantN := (s1+s3)/2 + (s1-s3)/2*math.Cos(2*b)
@@ -91,7 +92,7 @@ func TestCauchyOppositeFace(t *testing.T) {
 		}
 		dd := rng.Float64() * 360
 		a := Resolve(s, MustNew(90, dd), mu06)
-		b := Resolve(s, MustNew(90, insitu.Azimuth(dd+180)), mu06)
+		b := Resolve(s, MustNew(90, geom.Azimuth(dd+180)), mu06)
 		if !scalar.EqualWithinAbs(a.Normal, b.Normal, 1e-10) || !scalar.EqualWithinAbs(a.Shear, b.Shear, 1e-10) {
 			t.Fatalf("vertical plane %v: σn, τ differ between faces", dd)
 		}
@@ -145,7 +146,7 @@ func TestTsMaxOnOptimalPlane(t *testing.T) {
 	s := dryState(insitu.Andersonian(s1, s3, 0.5*(s1+s3), 0))
 	theta := insitu.OptimalAngle(mu) // angle between plane and σ1 (north)
 	// A vertical plane striking θ from north: its pole trend is θ + 90.
-	o := MustNew(90, insitu.Azimuth(theta+90+180))
+	o := MustNew(90, geom.Azimuth(theta+90+180))
 	r := Resolve(s, o, &Coulomb{Mu: mu})
 	if !scalar.EqualWithinAbs(r.SlipTendency, mu, 1e-12) || !scalar.EqualWithinAbs(r.NormalisedSlip, 1, 1e-12) {
 		t.Errorf("optimal plane Ts = %v, Ts/Ts,max = %v; want %v, 1", r.SlipTendency, r.NormalisedSlip, mu)
@@ -183,8 +184,8 @@ func TestAndersonianRakes(t *testing.T) {
 		{"reverse", 40, 20, 30, MustNew(a, 0), 90, Reverse},
 		// Strike-slip: σ1 N–S, σ3 E–W; vertical plane striking a east of north
 		// is sinistral, its conjugate striking −a dextral.
-		{"strike-slip sinistral", 40, 30, 20, MustNew(90, insitu.Azimuth(a+90)), 0, Sinistral},
-		{"strike-slip dextral", 40, 30, 20, MustNew(90, insitu.Azimuth(-a+90)), 180, Dextral},
+		{"strike-slip sinistral", 40, 30, 20, MustNew(90, geom.Azimuth(a+90)), 0, Sinistral},
+		{"strike-slip dextral", 40, 30, 20, MustNew(90, geom.Azimuth(-a+90)), 180, Dextral},
 	}
 	for _, c := range cases {
 		t.Run(c.name, func(t *testing.T) {
@@ -219,7 +220,7 @@ func TestDegenerateStates(t *testing.T) {
 	})
 	t.Run("critical", func(t *testing.T) {
 		s := insitu.NewState(insitu.Andersonian(30, 10, 20, 0), 0, 8, 1)
-		r := Resolve(s, MustNew(90, insitu.Azimuth(insitu.OptimalAngle(0.6)+90)), mu06)
+		r := Resolve(s, MustNew(90, geom.Azimuth(insitu.OptimalAngle(0.6)+90)), mu06)
 		if r.State != Critical || !(r.FactorOfSafety <= 1) || !(r.PressureToSlip <= 0) {
 			t.Errorf("%+v", r)
 		}

@@ -1,9 +1,8 @@
 package planes
 
 import (
+	"cleft/insitu/geom"
 	"math"
-
-	"cleft/insitu"
 
 	"gonum.org/v1/gonum/spatial/r3"
 )
@@ -114,12 +113,12 @@ func AnalyseSets(poles []r3.Vec, weights []float64, o SetOptions) SetAnalysis {
 	a.AngleToMean = make([]float64, len(poles))
 	for i, p := range poles {
 		if s := a.Assign[i]; s >= 0 {
-			a.AngleToMean[i] = insitu.AxialAngle(p, a.Sets[s].Raw.Mean)
+			a.AngleToMean[i] = geom.AxialAngle(p, a.Sets[s].Raw.Mean)
 			continue
 		}
 		a.AngleToMean[i] = math.NaN()
 		for _, s := range a.Sets {
-			if d := insitu.AxialAngle(p, s.Raw.Mean); !(d >= a.AngleToMean[i]) {
+			if d := geom.AxialAngle(p, s.Raw.Mean); !(d >= a.AngleToMean[i]) {
 				a.AngleToMean[i] = d
 			}
 		}

@@ -1,17 +1,16 @@
 package planes
 
 import (
+	"cleft/insitu/geom"
 	"math"
 	"math/rand/v2"
 	"testing"
-
-	"cleft/insitu"
 
 	"gonum.org/v1/gonum/floats/scalar"
 	"gonum.org/v1/gonum/spatial/r3"
 )
 
-func poles(lines ...insitu.Line) []r3.Vec {
+func poles(lines ...geom.Line) []r3.Vec {
 	out := make([]r3.Vec, len(lines))
 	for i, l := range lines {
 		out[i] = l.Vec()
@@ -24,8 +23,8 @@ func TestFisherHandComputed(t *testing.T) {
 	// cos α95 = 1 − ((N−R)/R)[(1/0.05)^(1/(N−1)) − 1]. Derived for poles
 	// 010/60, 020/65, 015/55, 005/62, 025/58, 012/70: N = 6, R = 5.969447,
 	// K = 163.65, α95 = 5.253°, mean pole 014.7/61.8.
-	ps := poles(insitu.Line{Trend: 10, Plunge: 60}, insitu.Line{Trend: 20, Plunge: 65}, insitu.Line{Trend: 15, Plunge: 55},
-		insitu.Line{Trend: 5, Plunge: 62}, insitu.Line{Trend: 25, Plunge: 58}, insitu.Line{Trend: 12, Plunge: 70})
+	ps := poles(geom.Line{Trend: 10, Plunge: 60}, geom.Line{Trend: 20, Plunge: 65}, geom.Line{Trend: 15, Plunge: 55},
+		geom.Line{Trend: 5, Plunge: 62}, geom.Line{Trend: 25, Plunge: 58}, geom.Line{Trend: 12, Plunge: 70})
 	f := Fisher(ps, nil)
 	if f.N != 6 || !scalar.EqualWithinAbs(f.R, 5.969447, 5e-7) || !scalar.EqualWithinAbs(f.K, 163.65, 0.005) || !scalar.EqualWithinAbs(f.Alpha, 5.253, 0.0005) {
 		t.Errorf("N %v R %v K %v α95 %v; want 6, 5.969447, 163.65, 5.253", f.N, f.R, f.K, f.Alpha)
@@ -39,7 +38,7 @@ func TestFisherHandComputed(t *testing.T) {
 	// Axes: flipping any pole to the upper hemisphere changes nothing.
 	flipped := append([]r3.Vec(nil), ps...)
 	flipped[2], flipped[4] = r3.Scale(-1, flipped[2]), r3.Scale(-1, flipped[4])
-	if g := Fisher(flipped, nil); !scalar.EqualWithinAbs(g.R, f.R, 1e-12) || insitu.AxialAngle(g.Mean, f.Mean) > 1e-9 {
+	if g := Fisher(flipped, nil); !scalar.EqualWithinAbs(g.R, f.R, 1e-12) || geom.AxialAngle(g.Mean, f.Mean) > 1e-9 {
 		t.Errorf("flipped poles changed the statistics: %+v vs %+v", g, f)
 	}
 	// Equal weights are no weights.
@@ -80,11 +79,11 @@ func TestFisherCoverage(t *testing.T) {
 	// 400 seeded trials: the binomial spread of the coverage is ±1.1 %.
 	rng := rand.New(rand.NewPCG(41, 42))
 	const trials, n, kappa = 400, 30, 40.0
-	mean := insitu.Line{Trend: 135, Plunge: 50}.Vec()
+	mean := geom.Line{Trend: 135, Plunge: 50}.Vec()
 	in, sumK := 0, 0.0
 	for range trials {
 		f := Fisher(fisherSample(rng, mean, kappa, n), nil)
-		if insitu.AxialAngle(f.Mean, mean) <= f.Alpha {
+		if geom.AxialAngle(f.Mean, mean) <= f.Alpha {
 			in++
 		}
 		sumK += f.K
@@ -145,7 +144,7 @@ func TestOrientationTensorPatterns(t *testing.T) {
 	if k := g.WoodcockK(); !(k < 1) {
 		t.Errorf("girdle K = %v, want < 1", k)
 	}
-	if a := insitu.AxialAngle(g.Axes[2], MustNew(30, 100).Normal()); a > 1e-6 {
+	if a := geom.AxialAngle(g.Axes[2], MustNew(30, 100).Normal()); a > 1e-6 {
 		t.Errorf("girdle S3 axis %v° from the girdle's pole", a)
 	}
 	var uni []r3.Vec
@@ -202,7 +201,7 @@ func TestClusterThreeSets(t *testing.T) {
 	c := Cluster(ps, ClusterOptions{K: 3})
 	// Sets come largest first, as the samples were drawn (80, 60, 40).
 	for k, m := range means {
-		if a := insitu.AxialAngle(c.Axes[k], m); a > 3 {
+		if a := geom.AxialAngle(c.Axes[k], m); a > 3 {
 			t.Errorf("set %d axis %.1f° from the true mean", k+1, a)
 		}
 	}
@@ -218,7 +217,7 @@ func TestClusterThreeSets(t *testing.T) {
 	// Seeds give the same sets.
 	s := Cluster(ps, ClusterOptions{Seeds: []r3.Vec{MustNew(70, 135).Normal(), MustNew(25, 245).Normal(), MustNew(80, 15).Normal()}})
 	for k := range means {
-		if insitu.AxialAngle(s.Axes[k], c.Axes[k]) > 0.5 {
+		if geom.AxialAngle(s.Axes[k], c.Axes[k]) > 0.5 {
 			t.Errorf("seeded set %d differs from the k-means set", k+1)
 		}
 	}
@@ -238,7 +237,7 @@ func TestClusterCutOff(t *testing.T) {
 		v := r3.Unit(r3.Vec{X: rng.NormFloat64(), Y: rng.NormFloat64(), Z: rng.NormFloat64()})
 		far := true
 		for _, m := range []r3.Vec{MustNew(75, 140).Normal(), MustNew(20, 250).Normal(), MustNew(85, 10).Normal()} {
-			if insitu.AxialAngle(v, m) < 40 {
+			if geom.AxialAngle(v, m) < 40 {
 				far = false
 			}
 		}
@@ -249,12 +248,12 @@ func TestClusterCutOff(t *testing.T) {
 	c := Cluster(ps, ClusterOptions{K: 3, MaxAngle: 25})
 	for i := n; i < len(ps); i++ {
 		if c.Assign[i] != -1 {
-			t.Errorf("outlier %d assigned to set %d (%.0f° from its axis)", i, c.Assign[i]+1, insitu.AxialAngle(ps[i], c.Axes[c.Assign[i]]))
+			t.Errorf("outlier %d assigned to set %d (%.0f° from its axis)", i, c.Assign[i]+1, geom.AxialAngle(ps[i], c.Axes[c.Assign[i]]))
 		}
 	}
 	for i, a := range c.Assign {
-		if a >= 0 && insitu.AxialAngle(ps[i], c.Axes[a]) > 25 {
-			t.Errorf("reading %d is %.1f° from its set axis, beyond the cut-off", i, insitu.AxialAngle(ps[i], c.Axes[a]))
+		if a >= 0 && geom.AxialAngle(ps[i], c.Axes[a]) > 25 {
+			t.Errorf("reading %d is %.1f° from its set axis, beyond the cut-off", i, geom.AxialAngle(ps[i], c.Axes[a]))
 		}
 	}
 }
@@ -295,7 +294,7 @@ func TestAnalyseSets(t *testing.T) {
 	total := a.Unassigned
 	for k, s := range a.Sets {
 		total += len(s.Members)
-		if d := insitu.AxialAngle(s.Raw.Mean, means[k]); d > 3 || d > 3*s.Raw.Alpha {
+		if d := geom.AxialAngle(s.Raw.Mean, means[k]); d > 3 || d > 3*s.Raw.Alpha {
 			t.Errorf("set %d mean %.1f° from the truth (α95 %.1f°)", k+1, d, s.Raw.Alpha)
 		}
 		if s.Weighted.K != s.Raw.K || s.WeightedCount != float64(len(s.Members)) {
@@ -306,7 +305,7 @@ func TestAnalyseSets(t *testing.T) {
 		t.Errorf("%d readings accounted for, want %d", total, len(ps))
 	}
 	for i, s := range a.Assign {
-		if s >= 0 && math.Abs(a.AngleToMean[i]-insitu.AxialAngle(ps[i], a.Sets[s].Raw.Mean)) > 1e-12 {
+		if s >= 0 && math.Abs(a.AngleToMean[i]-geom.AxialAngle(ps[i], a.Sets[s].Raw.Mean)) > 1e-12 {
 			t.Fatalf("angle to mean of reading %d", i)
 		}
 	}

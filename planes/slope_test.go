@@ -5,6 +5,8 @@ import (
 	"testing"
 
 	"cleft/insitu"
+	"cleft/insitu/geom"
+	"cleft/insitu/opening"
 
 	"gonum.org/v1/gonum/floats/scalar"
 	"gonum.org/v1/gonum/spatial/r3"
@@ -225,11 +227,11 @@ func TestClassifyDrive(t *testing.T) {
 
 func TestWallTensorResolved(t *testing.T) {
 	// A level tunnel driven north; far field vertical 10, east–west 5, axial
-	// 8 MPa; ν = 0.25. By hand (Kirsch with the axial term, see insitu.Wall):
+	// 8 MPa; ν = 0.25. By hand (Kirsch with the axial term, see opening.Wall):
 	// crown σθ = 3·5 − 10 = 5 along east, σz = 8 − 2·0.25·5 = 5.5; sidewall
 	// σθ = 15 + 2·5 = 25 vertical, σz = 8 + 2·0.25·5 = 10.5; σr = 0. On a
 	// plane dipping 45° east, the 2-D Mohr circle gives σn = τ = σθ/2.
-	up, right, along := insitu.TunnelFrame(insitu.Line{Trend: 0})
+	up, right, along := opening.TunnelFrame(geom.Line{Trend: 0})
 	far := insitu.Tensor{NN: 10, EE: 5, DD: 8}
 	c := &Coulomb{Mu: 0.6}
 	for _, w := range []struct {
@@ -239,7 +241,7 @@ func TestWallTensorResolved(t *testing.T) {
 		{0, 5, MustNew(90, 90)},
 		{90, 25, MustNew(0, 0)},
 	} {
-		ws := insitu.Wall(far, w.theta, 0.25)
+		ws := opening.Wall(far, w.theta, 0.25)
 		st := insitu.NewState(ws.WallTensor(up, right, along, w.theta), 100, 0, 1)
 		if r := Resolve(st, w.flat, c); !scalar.EqualWithinAbs(r.Normal, w.sigma, 1e-12) || r.Shear > 1e-12 {
 			t.Errorf("θ %v: plane normal to the tangent σn %v τ %v, want %v and 0", w.theta, r.Normal, r.Shear, w.sigma)
@@ -249,7 +251,7 @@ func TestWallTensorResolved(t *testing.T) {
 			t.Errorf("θ %v: 45/090 σn %v τ %v, want %v each", w.theta, r.Normal, r.Shear, w.sigma/2)
 		}
 	}
-	if ws := insitu.Wall(far, 0, 0.25); !scalar.EqualWithinAbs(ws.Z, 5.5, 1e-12) {
+	if ws := opening.Wall(far, 0, 0.25); !scalar.EqualWithinAbs(ws.Z, 5.5, 1e-12) {
 		t.Errorf("crown σz = %v, want 5.5", ws.Z)
 	}
 }

@@ -5,7 +5,7 @@ import (
 	"image/color"
 	"math"
 
-	"cleft/insitu"
+	"cleft/insitu/geom"
 	"cleft/planes"
 
 	"gonum.org/v1/plot/vg"
@@ -17,7 +17,7 @@ import (
 // (for wedges), with the verdict of its test.
 type KinItem struct {
 	Name         string
-	Line         insitu.Line
+	Line         geom.Line
 	Intersection bool // a wedge's line, else a plane's dip vector
 	Feasible     bool
 	Toppling     bool             // feasible for flexural toppling (dip vectors only)
@@ -69,7 +69,7 @@ func (k *KinematicNet) Draw(c draw.Canvas) {
 	n.c.StrokeLines(draw.LineStyle{Color: ink, Width: vg.Points(1)}, circlePath(n, fr, 240))
 	dash := draw.LineStyle{Color: ink, Width: vg.Points(0.8), Dashes: []vg.Length{vg.Points(4), vg.Points(2)}}
 	for _, d := range []float64{-k.LateralLimit, k.LateralLimit} {
-		s, co := insitu.SinCosDeg(k.Face.DipDirection + d)
+		s, co := geom.SinCosDeg(k.Face.DipDirection + d)
 		n.c.StrokeLines(dash, []vg.Point{n.pt(Point{X: s * fr, Y: co * fr}), n.pt(Point{X: s, Y: co})})
 	}
 	n.c.StrokeLines(draw.LineStyle{Color: ink, Width: vg.Points(1.8)}, n.path(k.Proj.GreatCircle(k.Face, 120)))
@@ -104,8 +104,8 @@ func (k *KinematicNet) fillZone(n net, t0, t1 float64, clr color.Color) {
 		if app <= k.Phi {
 			continue
 		}
-		outer = append(outer, k.Proj.Project(insitu.Line{Trend: insitu.Azimuth(t), Plunge: app}))
-		inner = append(inner, k.Proj.Project(insitu.Line{Trend: insitu.Azimuth(t), Plunge: k.Phi}))
+		outer = append(outer, k.Proj.Project(geom.Line{Trend: geom.Azimuth(t), Plunge: app}))
+		inner = append(inner, k.Proj.Project(geom.Line{Trend: geom.Azimuth(t), Plunge: k.Phi}))
 	}
 	if len(outer) < 2 {
 		return
@@ -128,7 +128,7 @@ func (k *KinematicNet) fillTopple(n net) {
 	back := k.Face.DipDirection + 180
 	var poly []Point
 	for t := back - k.ToppleLimit; t <= back+k.ToppleLimit+1e-9; t += k.ToppleLimit / 30 {
-		poly = append(poly, k.Proj.Project(insitu.Line{Trend: insitu.Azimuth(t), Plunge: pl}))
+		poly = append(poly, k.Proj.Project(geom.Line{Trend: geom.Azimuth(t), Plunge: pl}))
 	}
 	poly = append(poly, Point{})
 	path := n.path(poly)

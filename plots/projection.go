@@ -4,7 +4,7 @@ import (
 	"fmt"
 	"math"
 
-	"cleft/insitu"
+	"cleft/insitu/geom"
 	"cleft/planes"
 
 	"gonum.org/v1/gonum/spatial/r3"
@@ -72,7 +72,7 @@ func (p Projection) theta(r float64) float64 {
 
 // Project returns the net position of a line (lower hemisphere: a line with
 // negative plunge is taken as its opposite).
-func (p Projection) Project(l insitu.Line) Point {
+func (p Projection) Project(l geom.Line) Point {
 	return p.ProjectVec(l.Vec())
 }
 
@@ -94,17 +94,17 @@ func (p Projection) ProjectVec(v r3.Vec) Point {
 
 // Inverse returns the line at net position pt, and false when pt lies
 // outside the primitive.
-func (p Projection) Inverse(pt Point) (insitu.Line, bool) {
+func (p Projection) Inverse(pt Point) (geom.Line, bool) {
 	r := math.Hypot(pt.X, pt.Y)
 	if r > 1 {
-		return insitu.Line{}, false
+		return geom.Line{}, false
 	}
 	theta := p.theta(r)
 	trend := 0.0
 	if r > 0 {
-		trend = insitu.Azimuth(math.Atan2(pt.X, pt.Y) * 180 / math.Pi)
+		trend = geom.Azimuth(math.Atan2(pt.X, pt.Y) * 180 / math.Pi)
 	}
-	return insitu.Line{Trend: trend, Plunge: 90 - theta*180/math.Pi}, true
+	return geom.Line{Trend: trend, Plunge: 90 - theta*180/math.Pi}, true
 }
 
 // GreatCircle returns the trace of plane o on the net as n+1 points from one
@@ -130,7 +130,7 @@ func (p Projection) GreatCircle(o planes.Orientation, n int) []Point {
 // the part of it above the horizontal is drawn through the opposite, lower
 // hemisphere, so a cone about a steep plane's pole that crosses the primitive
 // comes out as two arcs meeting the primitive on opposite sides.
-func (p Projection) SmallCircle(axis insitu.Line, alpha float64, n int) [][]Point {
+func (p Projection) SmallCircle(axis geom.Line, alpha float64, n int) [][]Point {
 	a := axis.Vec()
 	// Two unit vectors normal to the axis.
 	ref := r3.Vec{Z: 1}

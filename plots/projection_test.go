@@ -5,7 +5,7 @@ import (
 	"math/rand/v2"
 	"testing"
 
-	"cleft/insitu"
+	"cleft/insitu/geom"
 	"cleft/planes"
 
 	"gonum.org/v1/gonum/floats/scalar"
@@ -29,7 +29,7 @@ func TestProjectionRadii(t *testing.T) {
 	}
 	for _, c := range cases {
 		for _, trend := range []float64{0, 73, 180, 300} {
-			l := insitu.Line{Trend: trend, Plunge: c.plunge}
+			l := geom.Line{Trend: trend, Plunge: c.plunge}
 			for _, pc := range []struct {
 				p    Projection
 				want float64
@@ -40,7 +40,7 @@ func TestProjectionRadii(t *testing.T) {
 				}
 				if c.plunge < 90 {
 					// x east, y north: the point lies at the trend, clockwise from north.
-					if az := insitu.Azimuth(math.Atan2(pt.X, pt.Y) * 180 / math.Pi); math.Abs(math.Remainder(az-trend, 360)) > 1e-9 {
+					if az := geom.Azimuth(math.Atan2(pt.X, pt.Y) * 180 / math.Pi); math.Abs(math.Remainder(az-trend, 360)) > 1e-9 {
 						t.Errorf("%v trend %v: plotted at azimuth %v", pc.p, trend, az)
 					}
 				}
@@ -53,9 +53,9 @@ func TestProjectionRoundTrip(t *testing.T) {
 	rng := rand.New(rand.NewPCG(31, 32))
 	for _, p := range []Projection{EqualArea, EqualAngle} {
 		for range 5000 {
-			l := insitu.Line{Trend: rng.Float64() * 360, Plunge: 0.01 + rng.Float64()*89.98}
+			l := geom.Line{Trend: rng.Float64() * 360, Plunge: 0.01 + rng.Float64()*89.98}
 			back, ok := p.Inverse(p.Project(l))
-			if !ok || insitu.Angle(back.Vec(), l.Vec()) > 1e-10 {
+			if !ok || geom.Angle(back.Vec(), l.Vec()) > 1e-10 {
 				t.Fatalf("%v: %v → %v", p, l, back)
 			}
 		}
@@ -72,7 +72,7 @@ func TestGreatCircle(t *testing.T) {
 		for _, o := range []planes.Orientation{planes.MustNew(65, 120), planes.MustNew(0, 30), planes.MustNew(90, 200), planes.MustNew(30, 0)} {
 			pts := p.GreatCircle(o, 180)
 			first, last := pts[0], pts[len(pts)-1]
-			s := p.Project(insitu.Line{Trend: o.Strike(), Plunge: 0})
+			s := p.Project(geom.Line{Trend: o.Strike(), Plunge: 0})
 			if !near(first, s, 1e-12) || !near(last, Point{-s.X, -s.Y}, 1e-12) {
 				t.Errorf("%v %v: ends %v, %v; want ±%v", p, o, first, last, s)
 			}
@@ -90,13 +90,13 @@ func TestGreatCircle(t *testing.T) {
 
 func TestSmallCircle(t *testing.T) {
 	for _, c := range []struct {
-		axis  insitu.Line
+		axis  geom.Line
 		alpha float64
 		paths int
 	}{
-		{insitu.Line{Trend: 40, Plunge: 60}, 10, 1},
-		{insitu.Line{Trend: 40, Plunge: 3}, 10, 2}, // crosses the primitive
-		{insitu.Line{Trend: 0, Plunge: 90}, 25, 1},
+		{geom.Line{Trend: 40, Plunge: 60}, 10, 1},
+		{geom.Line{Trend: 40, Plunge: 3}, 10, 2}, // crosses the primitive
+		{geom.Line{Trend: 0, Plunge: 90}, 25, 1},
 	} {
 		for _, p := range []Projection{EqualArea, EqualAngle} {
 			paths := p.SmallCircle(c.axis, c.alpha, 360)
@@ -111,7 +111,7 @@ func TestSmallCircle(t *testing.T) {
 					}
 					// Every sampled point is α from the axis (axially); the
 					// two points added on the primitive are within a sample step.
-					if a := insitu.AxialAngle(l.Vec(), c.axis.Vec()); math.Abs(a-c.alpha) > 1.1 {
+					if a := geom.AxialAngle(l.Vec(), c.axis.Vec()); math.Abs(a-c.alpha) > 1.1 {
 						t.Errorf("%v %v: point at %v° from the axis, want %v", p, c.axis, a, c.alpha)
 					}
 				}

@@ -11,6 +11,7 @@ import (
 	"time"
 
 	"cleft/insitu"
+	"cleft/insitu/geom"
 	"cleft/planes"
 
 	"gonum.org/v1/plot/vg"
@@ -110,7 +111,7 @@ var reportTmpl = template.Must(template.New("report").Funcs(template.FuncMap{
 	"regime": regimeText,
 	"ratio":  ratioText,
 	"limit":  func(mu float64) string { return fmtFixed(insitu.FrictionalLimit(mu), 3) },
-	"axis":   func(s insitu.State, i int) insitu.Line { return s.Principal.Axis(i) },
+	"axis":   func(s insitu.State, i int) geom.Line { return s.Principal.Axis(i) },
 	"eff":    func(s insitu.State, i int) float64 { return s.EffectivePrincipal()[i] },
 	"sigma":  func(s insitu.State, i int) float64 { return s.Principal.Values[i] },
 	"isopen": func(r planes.Result) bool { return r.State == planes.Opening },

@@ -7,6 +7,7 @@ import (
 	"math"
 
 	"cleft/insitu"
+	"cleft/insitu/geom"
 	"cleft/planes"
 
 	"gonum.org/v1/plot"
@@ -199,7 +200,7 @@ func drawPrimitive(n net) {
 	n.c.StrokeLines(draw.LineStyle{Color: ink, Width: vg.Points(1.1)}, circlePath(n, 1, 360))
 	// 10° ticks outside the primitive, longer every 90°.
 	for a := 0; a < 360; a += 10 {
-		s, c := insitu.SinCosDeg(float64(a))
+		s, c := geom.SinCosDeg(float64(a))
 		l := 0.025
 		if a%90 == 0 {
 			l = 0.05
@@ -236,7 +237,7 @@ func drawGrid(n net, p Projection) {
 	}
 	inner := p.Radius(10 * math.Pi / 180) // radials stop at plunge 80°
 	for a := 0; a < 360; a += 10 {
-		s, c := insitu.SinCosDeg(float64(a))
+		s, c := geom.SinCosDeg(float64(a))
 		n.c.StrokeLines(sty, []vg.Point{n.pt(Point{X: s * inner, Y: c * inner}), n.pt(Point{X: s, Y: c})})
 	}
 }

@@ -8,7 +8,7 @@ import (
 	"strings"
 
 	"cleft/cmd/cleft/site"
-	"cleft/insitu"
+	"cleft/insitu/geom"
 	"cleft/planes"
 	"cleft/plots"
 
@@ -61,11 +61,11 @@ type slopeRow struct {
 	test     string // planar, wedge, flexural-toppling
 	planes   string
 	k        planes.Kinematic
-	line     insitu.Line // wedge: the intersection; others: the dip vector
-	hasLine  bool        // wedge: the planes are not parallel
-	fs       []float64   // planar: one per water case
-	crack    float64     // planar: crack depth, m
-	waterToF float64     // planar: water depth to FS = 1, m (NaN: not reached)
+	line     geom.Line // wedge: the intersection; others: the dip vector
+	hasLine  bool      // wedge: the planes are not parallel
+	fs       []float64 // planar: one per water case
+	crack    float64   // planar: crack depth, m
+	waterToF float64   // planar: water depth to FS = 1, m (NaN: not reached)
 }
 
 // slopeScreen is the slope screening of an assessment.

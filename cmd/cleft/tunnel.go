@@ -8,6 +8,8 @@ import (
 
 	"cleft/cmd/cleft/site"
 	"cleft/insitu"
+	"cleft/insitu/geom"
+	"cleft/insitu/opening"
 	"cleft/planes"
 	"cleft/plots"
 
@@ -74,8 +76,8 @@ type tunnelRow struct {
 type tunnelStation struct {
 	st     site.Station
 	state  insitu.State
-	wall   []insitu.WallStress // at 0, perimeterStep, … degrees
-	maxI   int                 // index of the largest σθ
+	wall   []opening.WallStress // at 0, perimeterStep, … degrees
+	maxI   int                  // index of the largest σθ
 	minI   int
 	ratio  float64 // σθ,max / UCS
 	rows   []tunnelRow
@@ -137,14 +139,14 @@ func (a *assessment) screenTunnel() (*tunnelScreen, error) {
 	n := 360 / perimeterStep
 	for _, st := range sts {
 		ts := tunnelStation{st: st, state: a.site.Model.At(st.Depth)}
-		up, right, along := insitu.TunnelFrame(insitu.Line{Trend: st.Trend, Plunge: st.Plunge})
+		up, right, along := opening.TunnelFrame(geom.Line{Trend: st.Trend, Plunge: st.Plunge})
 		far := ts.state.Total.Rotate([3]r3.Vec{up, right, along})
 		if !t.Drained {
 			ts.wallPp = ts.state.PorePressure
 		}
 		walls := make([]insitu.State, n)
 		for k := range n {
-			w := insitu.Wall(far, float64(k*perimeterStep), t.Poisson)
+			w := opening.Wall(far, float64(k*perimeterStep), t.Poisson)
 			ts.wall = append(ts.wall, w)
 			walls[k] = insitu.NewState(w.WallTensor(up, right, along, float64(k*perimeterStep)), st.Depth, ts.wallPp, ts.state.Biot)
 			if w.Theta > ts.wall[ts.maxI].Theta {
@@ -237,7 +239,7 @@ func (sc *tunnelScreen) writeProfile(w io.Writer) error {
 	for _, ts := range sc.stations {
 		rows = append(rows, []string{cell(ts.st.Chainage), cell(ts.st.Trend), cell(ts.st.Plunge), cell(ts.st.Cover), cell(ts.st.Depth), cell(ts.state.PorePressure),
 			cell(ts.wall[ts.maxI].Theta), fmt.Sprint(ts.maxI * perimeterStep), cell(ts.wall[ts.minI].Theta), fmt.Sprint(ts.minI * perimeterStep),
-			cell(ts.ratio), insitu.SpallingBand(ts.ratio)})
+			cell(ts.ratio), spallingWords(opening.SpallingOf(ts.ratio))})
 	}
 	return writeCSV(w, rows)
 }
@@ -294,8 +296,8 @@ func (sc *tunnelScreen) lines() []string {
 		first.Chainage, last.Chainage, len(sc.stations), t.Spacing, t.Radius, t.UCS, map[bool]string{true: "drained (Pp = 0)", false: "at the far-field Pp"}[t.Drained])}
 	w := sc.stations[sc.worst()]
 	l := fmt.Sprintf("Largest tangential stress %.1f MPa at %g m (cover %.0f m), %d° from the crown: σθ/UCS = %.2f, %s (Martin, Kaiser & McCreath 1999).",
-		w.wall[w.maxI].Theta, w.st.Chainage, w.st.Cover, w.maxI*perimeterStep, w.ratio, insitu.SpallingBand(w.ratio))
-	if sp := sc.stretches(func(ts *tunnelStation) bool { return ts.ratio >= insitu.SpallingOnset-0.1 }); len(sp) > 0 {
+		w.wall[w.maxI].Theta, w.st.Chainage, w.st.Cover, w.maxI*perimeterStep, w.ratio, spallingWords(opening.SpallingOf(w.ratio)))
+	if sp := sc.stretches(func(ts *tunnelStation) bool { return ts.ratio >= opening.SpallingOnset-0.1 }); len(sp) > 0 {
 		l += fmt.Sprintf(" σθ/UCS ≥ 0.3 at %s m.", fmtStretches(sp))
 	}
 	out = append(out, l)
@@ -463,4 +465,16 @@ func (sc *tunnelScreen) reportTable() *plots.ReportTable {
 		t.Rows = append(t.Rows, []string{tg.name, fixed2(r.drive.StrikeToAxis, 0), r.drive.Drive, r.drive.Class, fixed2(r.far.SlipTendency, 3), fixed2(r.far.FactorOfSafety, 2), fixed2(r.far.PressureToSlip, 2), orNone(r.crit), orNone(r.open)})
 	}
 	return t
+}
+
+func spallingWords(s opening.Spalling) string {
+	switch s {
+	case opening.BelowOnset:
+		return "below the onset of spalling"
+	case opening.AtOnset:
+		return "at the onset of spalling (0.4 ± 0.1)"
+	case opening.PastOnset:
+		return "past the onset of spalling"
+	}
+	return ""
 }

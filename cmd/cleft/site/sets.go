@@ -10,7 +10,7 @@ import (
 	"strconv"
 	"strings"
 
-	"cleft/insitu"
+	"cleft/insitu/geom"
 	"cleft/planes"
 )
 
@@ -20,7 +20,7 @@ type SetsConfig struct {
 	Count     int                  // number of sets; 0 with no Seeds: automatic
 	Seeds     []planes.Orientation // starting set means
 	MaxAngle  float64              // cut-off cone, degrees; 0 for none
-	Line      *insitu.Line         // sampling line for Terzaghi weights, or nil
+	Line      *geom.Line           // sampling line for Terzaghi weights, or nil
 	MaxWeight float64              // cap of the Terzaghi weight
 }
 
@@ -28,17 +28,17 @@ type SetsConfig struct {
 var DefaultSets = SetsConfig{MaxWeight: planes.DefaultMaxWeight}
 
 // ParseLine reads "TREND/PLUNGE", e.g. "120/10".
-func ParseLine(s string) (insitu.Line, error) {
+func ParseLine(s string) (geom.Line, error) {
 	a, b, ok := strings.Cut(s, "/")
 	t, err1 := strconv.ParseFloat(strings.TrimSpace(a), 64)
 	p, err2 := strconv.ParseFloat(strings.TrimSpace(b), 64)
 	switch {
 	case !ok || err1 != nil || err2 != nil:
-		return insitu.Line{}, fmt.Errorf("%q: want TREND/PLUNGE in degrees, e.g. 120/10", s)
+		return geom.Line{}, fmt.Errorf("%q: want TREND/PLUNGE in degrees, e.g. 120/10", s)
 	case !(t >= 0 && t <= 360) || !(p >= 0 && p <= 90):
-		return insitu.Line{}, fmt.Errorf("%q: trend must be in [0, 360] and plunge in [0, 90]", s)
+		return geom.Line{}, fmt.Errorf("%q: trend must be in [0, 360] and plunge in [0, 90]", s)
 	}
-	return insitu.Line{Trend: insitu.Azimuth(t), Plunge: p}, nil
+	return geom.Line{Trend: geom.Azimuth(t), Plunge: p}, nil
 }
 
 func (s *Site) readSets(v node) error {

@@ -5,6 +5,7 @@ import (
 	"strings"
 
 	"cleft/insitu"
+	"cleft/insitu/geom"
 )
 
 var stressKeys = []string{"vertical", "shmax", "shmin", "principal", "tensor", "reference_depth", "scaling", "source"}
@@ -243,7 +244,7 @@ func (s *Site) readMeasured(m *fields, src string) error {
 			return pv.errf("want three principal stresses, got %d", len(items))
 		}
 		var mags [3]float64
-		var axes [3]insitu.Line
+		var axes [3]geom.Line
 		for i, it := range items {
 			im, err := it.mapping("magnitude", "trend", "plunge", "source")
 			if err != nil {

@@ -1,6 +1,8 @@
-package insitu
+package opening
 
 import (
+	"cleft/insitu"
+	"cleft/insitu/geom"
 	"math"
 
 	"gonum.org/v1/gonum/spatial/r3"
@@ -12,7 +14,7 @@ import (
 // looking along the drive (Right = Axis × Up); and Axis itself. (Up, Right,
 // Axis) is right-handed. A vertical axis has no vertical plane: Up is then
 // taken towards north.
-func TunnelFrame(axis Line) (up, right, along r3.Vec) {
+func TunnelFrame(axis geom.Line) (up, right, along r3.Vec) {
 	along = axis.Vec() // a negative plunge (rising drive) gives an upward component
 	z := r3.Vec{Z: -1}
 	up = r3.Sub(z, r3.Scale(r3.Dot(z, along), along))
@@ -45,9 +47,9 @@ type WallStress struct {
 //
 // With a vertical far field p and horizontal Kp this is Brady & Brown's
 // σθ = p[(1 + K) + 2(1 − K) cos 2θ] measured from the sidewall.
-func Wall(far Tensor, theta, nu float64) WallStress {
-	s, c := SinCosDeg(theta)
-	s2, c2 := SinCosDeg(2 * theta)
+func Wall(far insitu.Tensor, theta, nu float64) WallStress {
+	s, c := geom.SinCosDeg(theta)
+	s2, c2 := geom.SinCosDeg(2 * theta)
 	d := far.NN - far.EE
 	return WallStress{
 		Theta:  far.NN + far.EE - 2*d*c2 - 4*far.NE*s2,
@@ -59,11 +61,11 @@ func Wall(far Tensor, theta, nu float64) WallStress {
 // WallTensor returns the wall stress at theta as a full tensor in the NED
 // frame, for resolving on planes: σ = σθ eθeθᵀ + σz aaᵀ + τθz(eθaᵀ + aeθᵀ),
 // with eθ = −sin θ·Up + cos θ·Right the tangent to the wall and a the axis.
-func (w WallStress) WallTensor(up, right, along r3.Vec, theta float64) Tensor {
-	s, c := SinCosDeg(theta)
+func (w WallStress) WallTensor(up, right, along r3.Vec, theta float64) insitu.Tensor {
+	s, c := geom.SinCosDeg(theta)
 	e := r3.Add(r3.Scale(-s, up), r3.Scale(c, right))
 	a := along
-	t := Tensor{}
+	t := insitu.Tensor{}
 	add := func(k float64, p, q r3.Vec) { // k·(p qᵀ + q pᵀ)/2 in symmetric form
 		t.NN += k * p.X * q.X
 		t.EE += k * p.Y * q.Y
@@ -78,20 +80,31 @@ func (w WallStress) WallTensor(up, right, along r3.Vec, theta float64) Tensor {
 	return t
 }
 
-// SpallingOnset is the ratio σθ,max/σc at which brittle failure (spalling)
+// SpallingOnset is the ratio σmax/σc at which brittle failure (spalling)
 // of the wall starts, about 0.4 ± 0.1 (Martin, Kaiser & McCreath 1999).
 const SpallingOnset = 0.4
 
-// SpallingBand names where a ratio σθ,max/σc sits against the onset of
-// spalling of Martin, Kaiser & McCreath (1999), 0.4 ± 0.1.
-func SpallingBand(ratio float64) string {
+// Spalling is where a ratio σmax/σc sits against the onset of spalling of
+// Martin, Kaiser & McCreath (1999), 0.4 ± 0.1. The zero value is
+// SpallingUnknown, for an undefined ratio.
+type Spalling int
+
+const (
+	SpallingUnknown Spalling = iota
+	BelowOnset               // ratio < 0.3
+	AtOnset                  // 0.3 ≤ ratio ≤ 0.5
+	PastOnset                // ratio > 0.5
+)
+
+// SpallingOf returns the band of ratio; NaN gives SpallingUnknown.
+func SpallingOf(ratio float64) Spalling {
 	switch {
 	case math.IsNaN(ratio):
-		return ""
+		return SpallingUnknown
 	case ratio < SpallingOnset-0.1:
-		return "below the onset of spalling"
+		return BelowOnset
 	case ratio <= SpallingOnset+0.1:
-		return "at the onset of spalling (0.4 ± 0.1)"
+		return AtOnset
 	}
-	return "past the onset of spalling"
+	return PastOnset
 }

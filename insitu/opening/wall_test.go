@@ -1,6 +1,8 @@
-package insitu
+package opening
 
 import (
+	"cleft/insitu"
+	"cleft/insitu/geom"
 	"math"
 	"math/rand/v2"
 	"testing"
@@ -17,23 +19,23 @@ func TestKirschCheckValues(t *testing.T) {
 	//  - K = 1/3: no tangential stress at the crown.
 	const p = 10.0
 	for th := 0.0; th < 360; th += 15 {
-		if w := Wall(Tensor{NN: p, EE: p, DD: p}, th, 0.25); !scalar.EqualWithinAbs(w.Theta, 2*p, 1e-12) {
+		if w := Wall(insitu.Tensor{NN: p, EE: p, DD: p}, th, 0.25); !scalar.EqualWithinAbs(w.Theta, 2*p, 1e-12) {
 			t.Fatalf("hydrostatic: σθ(%v) = %v, want %v", th, w.Theta, 2*p)
 		}
 	}
-	uni := Tensor{NN: p}
+	uni := insitu.Tensor{NN: p}
 	for _, c := range []struct{ th, want float64 }{{0, -p}, {180, -p}, {90, 3 * p}, {270, 3 * p}} {
 		if w := Wall(uni, c.th, 0.25); !scalar.EqualWithinAbs(w.Theta, c.want, 1e-12) {
 			t.Errorf("uniaxial vertical: σθ(%v) = %v, want %v", c.th, w.Theta, c.want)
 		}
 	}
-	if w := Wall(Tensor{NN: p, EE: p / 3}, 0, 0.25); !scalar.EqualWithinAbs(w.Theta, 0, 1e-12) {
+	if w := Wall(insitu.Tensor{NN: p, EE: p / 3}, 0, 0.25); !scalar.EqualWithinAbs(w.Theta, 0, 1e-12) {
 		t.Errorf("K = 1/3: crown σθ = %v, want 0", w.Theta)
 	}
 	// Brady & Brown eqs. 6.18–6.20 (read), derived: p = 10, K = 0.5: sidewall
 	// 25, crown 5; K = 0: 30 and −10.
 	for _, c := range []struct{ k, side, crown float64 }{{0.5, 25, 5}, {0, 30, -10}} {
-		far := Tensor{NN: p, EE: c.k * p}
+		far := insitu.Tensor{NN: p, EE: c.k * p}
 		if s, cr := Wall(far, 90, 0.2).Theta, Wall(far, 0, 0.2).Theta; !scalar.EqualWithinAbs(s, c.side, 1e-12) || !scalar.EqualWithinAbs(cr, c.crown, 1e-12) {
 			t.Errorf("K = %v: sidewall %v, crown %v; want %v, %v", c.k, s, cr, c.side, c.crown)
 		}
@@ -43,7 +45,7 @@ func TestKirschCheckValues(t *testing.T) {
 func TestTunnelFrame(t *testing.T) {
 	rng := rand.New(rand.NewPCG(61, 62))
 	for range 200 {
-		l := Line{Trend: rng.Float64() * 360, Plunge: rng.Float64()*20 - 10}
+		l := geom.Line{Trend: rng.Float64() * 360, Plunge: rng.Float64()*20 - 10}
 		u, r, a := TunnelFrame(l)
 		if d := r3.Dot(r3.Cross(u, r), a); !scalar.EqualWithinAbs(d, 1, 1e-12) {
 			t.Fatalf("%v: (up, right, axis) not right-handed: %v", l, d)
@@ -52,9 +54,9 @@ func TestTunnelFrame(t *testing.T) {
 			t.Fatalf("%v: up %v not upward or right %v not horizontal", l, u, r)
 		}
 		// Rotation into the tunnel frame keeps the invariants.
-		s := Tensor{NN: 30, EE: 18, DD: 22, NE: 3, ND: -1, ED: 2}
+		s := insitu.Tensor{NN: 30, EE: 18, DD: 22, NE: 3, ND: -1, ED: 2}
 		f := s.Rotate([3]r3.Vec{u, r, a})
-		i2 := func(t Tensor) float64 {
+		i2 := func(t insitu.Tensor) float64 {
 			return t.NN*t.EE + t.EE*t.DD + t.DD*t.NN - t.NE*t.NE - t.ND*t.ND - t.ED*t.ED
 		}
 		if !scalar.EqualWithinAbs(f.Trace(), s.Trace(), 1e-10) || !scalar.EqualWithinAbs(i2(f), i2(s), 1e-9) {
@@ -62,8 +64,8 @@ func TestTunnelFrame(t *testing.T) {
 		}
 	}
 	// A tunnel along SHmax sees (Sv, Shmin) in its section and SHmax along it.
-	s := Andersonian(40, 20, 30, 65)
-	u, r, a := TunnelFrame(Line{Trend: 65})
+	s := insitu.Andersonian(40, 20, 30, 65)
+	u, r, a := TunnelFrame(geom.Line{Trend: 65})
 	f := s.Rotate([3]r3.Vec{u, r, a})
 	if !scalar.EqualWithinAbs(f.NN, 30, 1e-12) || !scalar.EqualWithinAbs(f.EE, 20, 1e-12) || !scalar.EqualWithinAbs(f.DD, 40, 1e-12) || math.Abs(f.NE) > 1e-12 {
 		t.Errorf("along SHmax: section %v %v, axis %v", f.NN, f.EE, f.DD)
@@ -73,11 +75,11 @@ func TestTunnelFrame(t *testing.T) {
 func TestWallTensor(t *testing.T) {
 	// The wall tensor reproduces σθ, σz, τθz on its own axes and has no
 	// traction on the wall (σr = 0, τrθ = τrz = 0).
-	u, r, a := TunnelFrame(Line{Trend: 30, Plunge: 2})
+	u, r, a := TunnelFrame(geom.Line{Trend: 30, Plunge: 2})
 	for th := 0.0; th < 360; th += 30 {
 		w := WallStress{Theta: 25, Z: 12, ThetaZ: -3}
 		m := w.WallTensor(u, r, a, th)
-		s, c := SinCosDeg(th)
+		s, c := geom.SinCosDeg(th)
 		e := r3.Add(r3.Scale(-s, u), r3.Scale(c, r))
 		radial := r3.Add(r3.Scale(c, u), r3.Scale(s, r))
 		if got := r3.Dot(e, m.Apply(e)); !scalar.EqualWithinAbs(got, 25, 1e-12) {
@@ -92,14 +94,14 @@ func TestWallTensor(t *testing.T) {
 	}
 }
 
-func TestSpallingBand(t *testing.T) {
+func TestSpallingOf(t *testing.T) {
 	// Martin, Kaiser & McCreath (1999) (read): spalling starts at σθ,max/σc ≈ 0.4 ± 0.1.
 	for _, c := range []struct {
 		r    float64
-		want string
-	}{{0.2, "below"}, {0.3, "at the onset"}, {0.45, "at the onset"}, {0.5, "at the onset"}, {0.51, "past"}} {
-		if got := SpallingBand(c.r); len(got) < len(c.want) || got[:len(c.want)] != c.want {
-			t.Errorf("ratio %v: %q", c.r, got)
+		want Spalling
+	}{{0.2, BelowOnset}, {0.2999, BelowOnset}, {0.3, AtOnset}, {0.45, AtOnset}, {0.5, AtOnset}, {0.51, PastOnset}, {math.NaN(), SpallingUnknown}} {
+		if got := SpallingOf(c.r); got != c.want {
+			t.Errorf("ratio %v: %v, want %v", c.r, got, c.want)
 		}
 	}
 }
@@ -111,12 +113,12 @@ func TestWallRotatesWithTheFarField(t *testing.T) {
 	// values fix.
 	rng := rand.New(rand.NewPCG(63, 64))
 	for range 200 {
-		far := Tensor{NN: 5 + rng.Float64()*20, EE: 5 + rng.Float64()*20, DD: 5 + rng.Float64()*20,
+		far := insitu.Tensor{NN: 5 + rng.Float64()*20, EE: 5 + rng.Float64()*20, DD: 5 + rng.Float64()*20,
 			NE: rng.Float64()*6 - 3, ND: rng.Float64()*6 - 3, ED: rng.Float64()*6 - 3}
 		beta := rng.Float64() * 360
 		// Frame turned by −β about the axis (x3): the rows of q are the new
 		// axes expressed in the old ones.
-		s, c := SinCosDeg(beta)
+		s, c := geom.SinCosDeg(beta)
 		q := [3]r3.Vec{{X: c, Y: -s}, {X: s, Y: c}, {Z: 1}}
 		turned := far.Rotate(q)
 		for th := 0.0; th < 360; th += 30 {
