@@ -29,11 +29,11 @@ func ClassifyDrive(o Orientation, trend float64) DriveClass {
 		d = 180 - d
 	}
 	c := DriveClass{StrikeToAxis: d}
-	if o.Dip < 20 {
+	if o.Dip() < 20 {
 		c.Class, c.Rule = "fair", "dip 0–20°, irrespective of strike"
 		return c
 	}
-	steep := o.Dip >= 45
+	steep := o.Dip() >= 45
 	if d < 45 {
 		if steep {
 			c.Class, c.Rule = "very unfavourable", "strike parallel to the axis, dip 45–90°"
@@ -42,7 +42,7 @@ func ClassifyDrive(o Orientation, trend float64) DriveClass {
 		}
 		return c
 	}
-	_, cos := geom.SinCosDeg(trend - o.DipDirection)
+	_, cos := geom.SinCosDeg(trend - o.DipDirection())
 	with := cos > 0
 	switch {
 	case with && steep:

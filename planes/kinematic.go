@@ -17,8 +17,8 @@ import (
 // It is negative along azimuths pointing up the dip (|β| > 90°), 0 along
 // the strike, and δ along the dip direction.
 func ApparentDip(o Orientation, az float64) float64 {
-	_, c := geom.SinCosDeg(az - o.DipDirection)
-	if o.Dip == 90 {
+	_, c := geom.SinCosDeg(az - o.DipDirection())
+	if o.Dip() == 90 {
 		switch {
 		case c > 0:
 			return 90
@@ -27,7 +27,7 @@ func ApparentDip(o Orientation, az float64) float64 {
 		}
 		return 0
 	}
-	return math.Atan(math.Tan(o.Dip*math.Pi/180)*c) * 180 / math.Pi
+	return math.Atan(math.Tan(o.Dip()*math.Pi/180)*c) * 180 / math.Pi
 }
 
 // Intersection returns the line of intersection of two planes, in the
@@ -95,17 +95,17 @@ func (k Kinematic) Reason() string {
 // within lateral degrees of the face's.
 func PlanarSliding(p, f Orientation, phi, lateral float64) Kinematic {
 	var k Kinematic
-	if d := azDiff(p.DipDirection, f.DipDirection); d > lateral {
+	if d := azDiff(p.DipDirection(), f.DipDirection()); d > lateral {
 		k.Fails |= Lateral
 		k.Failed = append(k.Failed, fmt.Sprintf("dip direction %.0f° from the face's, beyond the lateral limit of %g°", d, lateral))
 	}
-	if app := ApparentDip(f, p.DipDirection); !(p.Dip < app) {
+	if app := ApparentDip(f, p.DipDirection()); !(p.Dip() < app) {
 		k.Fails |= Daylight
-		k.Failed = append(k.Failed, fmt.Sprintf("does not daylight: dips %.0f°, the face %.1f° in that direction", p.Dip, app))
+		k.Failed = append(k.Failed, fmt.Sprintf("does not daylight: dips %.0f°, the face %.1f° in that direction", p.Dip(), app))
 	}
-	if p.Dip < phi {
+	if p.Dip() < phi {
 		k.Fails |= Friction
-		k.Failed = append(k.Failed, fmt.Sprintf("dips %.0f°, less than the friction angle %g°", p.Dip, phi))
+		k.Failed = append(k.Failed, fmt.Sprintf("dips %.0f°, less than the friction angle %g°", p.Dip(), phi))
 	}
 	k.Feasible = len(k.Failed) == 0
 	if k.Feasible {
@@ -129,10 +129,10 @@ func WedgeSliding(a, b Orientation, na, nb string, f Orientation, phi float64) (
 		return l, k
 	}
 	// Of the two senses of a horizontal line, take the one towards the face.
-	if l.Plunge == 0 && azDiff(l.Trend, f.DipDirection) > 90 {
+	if l.Plunge == 0 && azDiff(l.Trend, f.DipDirection()) > 90 {
 		l.Trend = geom.Azimuth(l.Trend + 180)
 	}
-	if d := azDiff(l.Trend, f.DipDirection); d >= 90 {
+	if d := azDiff(l.Trend, f.DipDirection()); d >= 90 {
 		k.Fails |= Daylight
 		k.Failed = append(k.Failed, fmt.Sprintf("the line plunges into the slope (trend %.0f°, %.0f° from the face's dip direction)", l.Trend, d))
 	} else if app := ApparentDip(f, l.Trend); !(l.Plunge < app) {
@@ -150,7 +150,7 @@ func WedgeSliding(a, b Orientation, na, nb string, f Orientation, phi float64) (
 			o    Orientation
 			name string
 		}{{a, na}, {b, nb}} {
-			if between(c.o.DipDirection, l.Trend, f.DipDirection) {
+			if between(c.o.DipDirection(), l.Trend, f.DipDirection()) {
 				k.Mode = "single-plane sliding on " + c.name
 			}
 		}
@@ -173,13 +173,13 @@ func between(x, a, b float64) bool {
 // so that slip between the layers can take place.
 func FlexuralToppling(p, f Orientation, phi, lateral float64) Kinematic {
 	var k Kinematic
-	if d := azDiff(p.DipDirection, f.DipDirection+180); d > lateral {
+	if d := azDiff(p.DipDirection(), f.DipDirection()+180); d > lateral {
 		k.Fails |= Lateral
 		k.Failed = append(k.Failed, fmt.Sprintf("does not dip into the face: dip direction %.0f° from the opposite of the face's, beyond the lateral limit of %g°", d, lateral))
 	}
-	if s := 90 - p.Dip + phi; s > f.Dip {
+	if s := 90 - p.Dip() + phi; s > f.Dip() {
 		k.Fails |= Toppling
-		k.Failed = append(k.Failed, fmt.Sprintf("(90° − dip) + φ = %.0f° exceeds the face dip %g°", s, f.Dip))
+		k.Failed = append(k.Failed, fmt.Sprintf("(90° − dip) + φ = %.0f° exceeds the face dip %g°", s, f.Dip()))
 	}
 	k.Feasible = len(k.Failed) == 0
 	if k.Feasible {

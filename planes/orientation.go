@@ -11,16 +11,31 @@ import (
 )
 
 // Orientation is a plane given by its dip and dip direction, in degrees, with
-// its geometry worked out once at construction. Build it with New, FromStrike,
-// FromPole or Parse; the zero value is a horizontal plane dipping north.
+// its geometry worked out once at construction. It is read-only: build it
+// with New, FromStrike, FromPole, FromNormal or Parse. The zero value is the
+// horizontal plane 0/000 (pole straight down, strike towards west).
 type Orientation struct {
-	Dip          float64 // ∈ [0, 90]
-	DipDirection float64 // ∈ [0, 360)
+	dip float64 // ∈ [0, 90]
+	dd  float64 // ∈ [0, 360)
 
+	built  bool   // false for the zero value, whose vectors are those of 0/000
 	pole   r3.Vec // unit normal, pointing down (lower hemisphere)
 	strike r3.Vec // unit, horizontal, along strike (right-hand rule)
 	updip  r3.Vec // unit, in the plane, pointing up the dip
 }
+
+// The vectors of the zero value, the plane 0/000.
+var (
+	zeroPole   = r3.Vec{Z: 1}
+	zeroStrike = r3.Vec{Y: -1}
+	zeroUpdip  = r3.Vec{X: -1}
+)
+
+// Dip returns the dip in degrees, ∈ [0, 90].
+func (o Orientation) Dip() float64 { return o.dip }
+
+// DipDirection returns the dip direction in degrees, ∈ [0, 360).
+func (o Orientation) DipDirection() float64 { return o.dd }
 
 // New returns the plane with dip ∈ [0, 90] and dip direction ∈ [0, 360]
 // (360 is stored as 0). Dips of 0 and 90 are exact: the pole of a vertical
@@ -50,11 +65,12 @@ func build(dip, dd float64) Orientation {
 	sd, cd := geom.SinCosDeg(dip)
 	sa, ca := geom.SinCosDeg(dd)
 	return Orientation{
-		Dip:          dip,
-		DipDirection: dd,
-		pole:         r3.Vec{X: -sd * ca, Y: -sd * sa, Z: cd},
-		strike:       r3.Vec{X: sa, Y: -ca},
-		updip:        r3.Vec{X: -cd * ca, Y: -cd * sa, Z: -sd},
+		dip:     dip,
+		dd:      dd,
+		built:  true,
+		pole:   r3.Vec{X: -sd * ca, Y: -sd * sa, Z: cd},
+		strike: r3.Vec{X: sa, Y: -ca},
+		updip:  r3.Vec{X: -cd * ca, Y: -cd * sa, Z: -sd},
 	}
 }
 
@@ -106,31 +122,49 @@ func Parse(s string) (Orientation, error) {
 // String returns "DIP/DIPDIRECTION" with dip two digits and dip direction
 // three, e.g. "65/120".
 func (o Orientation) String() string {
-	return fmt.Sprintf("%02.0f/%03.0f", o.Dip, o.DipDirection)
+	return fmt.Sprintf("%02.0f/%03.0f", o.dip, o.dd)
 }
 
 // Normal returns the unit pole of the plane, pointing down (into the
 // footwall from the hanging wall):
 //
 //	(−sin δ·cos α, −sin δ·sin α, cos δ)  for dip δ, dip direction α
-func (o Orientation) Normal() r3.Vec { return o.pole }
+func (o Orientation) Normal() r3.Vec {
+	if !o.built {
+		return zeroPole
+	}
+	return o.pole
+}
 
 // Pole returns the trend and plunge of the lower-hemisphere pole:
 // trend = dip direction + 180, plunge = 90 − dip.
 func (o Orientation) Pole() geom.Line {
-	return geom.Line{Trend: geom.Azimuth(o.DipDirection + 180), Plunge: 90 - o.Dip}
+	return geom.Line{Trend: geom.Azimuth(o.dd + 180), Plunge: 90 - o.dip}
 }
 
 // Strike returns the strike in [0, 360), right-hand rule: dip direction − 90.
-func (o Orientation) Strike() float64 { return geom.Azimuth(o.DipDirection - 90) }
+func (o Orientation) Strike() float64 { return geom.Azimuth(o.dd - 90) }
 
 // StrikeVec returns the horizontal unit vector along strike.
-func (o Orientation) StrikeVec() r3.Vec { return o.strike }
+func (o Orientation) StrikeVec() r3.Vec {
+	if !o.built {
+		return zeroStrike
+	}
+	return o.strike
+}
 
 // DownDip returns the unit vector down the line of steepest dip.
-func (o Orientation) DownDip() r3.Vec { return r3.Scale(-1, o.updip) }
+func (o Orientation) DownDip() r3.Vec { return r3.Scale(-1, o.UpDip()) }
+
+// UpDip returns the unit vector up the line of steepest dip.
+func (o Orientation) UpDip() r3.Vec {
+	if !o.built {
+		return zeroUpdip
+	}
+	return o.updip
+}
 
 // DipLine returns the trend and plunge of the line of steepest dip.
 func (o Orientation) DipLine() geom.Line {
-	return geom.Line{Trend: o.DipDirection, Plunge: o.Dip}
+	return geom.Line{Trend: o.dd, Plunge: o.dip}
 }

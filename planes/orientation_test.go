@@ -1,6 +1,7 @@
 package planes
 
 import (
+	"cleft/insitu"
 	"cleft/insitu/geom"
 	"math"
 	"testing"
@@ -27,8 +28,8 @@ func TestOrientationExactEdges(t *testing.T) {
 			t.Errorf("%v/%v: pole %v, want %v", c.dip, c.dd, o.Normal(), c.pole)
 		}
 	}
-	if o := MustNew(30, 360); o.DipDirection != 0 {
-		t.Errorf("dip direction 360 stored as %v, want 0", o.DipDirection)
+	if o := MustNew(30, 360); o.DipDirection() != 0 {
+		t.Errorf("dip direction 360 stored as %v, want 0", o.DipDirection())
 	}
 }
 
@@ -58,22 +59,22 @@ func TestOrientationFrames(t *testing.T) {
 func TestOrientationConstructors(t *testing.T) {
 	// Right-hand rule (common practice): strike 030, dip 60 dips to 120.
 	o, err := FromStrike(30, 60)
-	if err != nil || o.DipDirection != 120 || o.Dip != 60 || o.Strike() != 30 {
+	if err != nil || o.DipDirection() != 120 || o.Dip() != 60 || o.Strike() != 30 {
 		t.Errorf("FromStrike(30, 60) = %v, %v", o, err)
 	}
 	o, err = FromStrike(300, 45)
-	if err != nil || o.DipDirection != 30 {
-		t.Errorf("FromStrike(300, 45) dip direction = %v, want 30", o.DipDirection)
+	if err != nil || o.DipDirection() != 30 {
+		t.Errorf("FromStrike(300, 45) dip direction = %v, want 30", o.DipDirection())
 	}
 	o, err = FromPole(300, 20)
-	if err != nil || o.DipDirection != 120 || o.Dip != 70 {
+	if err != nil || o.DipDirection() != 120 || o.Dip() != 70 {
 		t.Errorf("FromPole(300, 20) = %v, %v; want 70/120", o, err)
 	}
 	o, err = Parse(" 65 / 120 ")
-	if err != nil || o.Dip != 65 || o.DipDirection != 120 || o.String() != "65/120" {
+	if err != nil || o.Dip() != 65 || o.DipDirection() != 120 || o.String() != "65/120" {
 		t.Errorf("Parse = %v, %v", o, err)
 	}
-	if q := FromNormal(r3.Scale(-1, MustNew(65, 120).Normal())); !scalar.EqualWithinAbs(q.Dip, 65, 1e-9) || !scalar.EqualWithinAbs(q.DipDirection, 120, 1e-9) {
+	if q := FromNormal(r3.Scale(-1, MustNew(65, 120).Normal())); !scalar.EqualWithinAbs(q.Dip(), 65, 1e-9) || !scalar.EqualWithinAbs(q.DipDirection(), 120, 1e-9) {
 		t.Errorf("FromNormal(−pole) = %v, want 65/120", q)
 	}
 	for _, bad := range []struct {
@@ -113,5 +114,20 @@ func TestSenseOf(t *testing.T) {
 		if got := SenseOf(c.rake); got != c.want {
 			t.Errorf("SenseOf(%v) = %v, want %v", c.rake, got, c.want)
 		}
+	}
+}
+
+func TestZeroOrientationIsHorizontal(t *testing.T) {
+	// The zero value is documented as the plane 0/000: it must behave as
+	// New(0, 0) does, not as a plane without a pole.
+	var z Orientation
+	n := MustNew(0, 0)
+	if z.Normal() != n.Normal() || z.StrikeVec() != n.StrikeVec() || z.UpDip() != n.UpDip() || z.Dip() != 0 || z.DipDirection() != 0 {
+		t.Fatalf("zero value %v %v %v differs from 0/000 %v %v %v", z.Normal(), z.StrikeVec(), z.UpDip(), n.Normal(), n.StrikeVec(), n.UpDip())
+	}
+	s := insitu.NewState(insitu.Andersonian(30, 20, 25, 0), 1000, 0, 1)
+	c, _ := NewCoulomb(0.6, 0)
+	if r := Resolve(s, z, c); r.State == Opening || r.EffectiveNormal != 25 {
+		t.Errorf("zero-value plane under compression: %v, σn' %v (want Sv = 25, stable)", r.State, r.EffectiveNormal)
 	}
 }

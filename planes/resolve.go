@@ -86,7 +86,7 @@ func Resolve(s insitu.State, o Orientation, c Criterion) Result {
 
 // ResolveTo is Resolve writing into r, for hot loops: it copies nothing.
 func ResolveTo(r *Result, s *insitu.State, o *Orientation, c Criterion) {
-	n := o.pole
+	n := o.Normal()
 	t := s.Total.Apply(n)
 	sn := r3.Dot(t, n)
 	sv := r3.Sub(t, r3.Scale(sn, n))
@@ -100,7 +100,7 @@ func ResolveTo(r *Result, s *insitu.State, o *Orientation, c Criterion) {
 	nan := math.NaN()
 	r.Rake, r.Sense = nan, NoSlip
 	if tau > shearTol*scale {
-		r.Rake = math.Atan2(r3.Dot(sv, o.updip), r3.Dot(sv, o.strike)) * (180 / math.Pi)
+		r.Rake = math.Atan2(r3.Dot(sv, o.UpDip()), r3.Dot(sv, o.StrikeVec())) * (180 / math.Pi)
 		if r.Rake == -180 {
 			r.Rake = 180
 		}

@@ -115,7 +115,7 @@ func TestSetStraddlingThePrimitive(t *testing.T) {
 		}
 	}
 	plane := f.MeanPlane()
-	if plane.Dip < 87 || math.Abs(math.Remainder(plane.DipDirection-90, 180)) > 3 {
+	if plane.Dip() < 87 || math.Abs(math.Remainder(plane.DipDirection()-90, 180)) > 3 {
 		t.Errorf("mean plane %v, want about 89/090 or 89/270", plane)
 	}
 	if f.Alpha > 3 || f.K < 100 {

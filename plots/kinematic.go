@@ -60,8 +60,8 @@ func (k *KinematicNet) Draw(c draw.Canvas) {
 
 	// Zones first, as fills: wedge (any trend out of the face), planar
 	// (within the lateral limits), toppling.
-	k.fillZone(n, k.Face.DipDirection-89.9, k.Face.DipDirection+89.9, wedgeFill)
-	k.fillZone(n, k.Face.DipDirection-k.LateralLimit, k.Face.DipDirection+k.LateralLimit, slideFill)
+	k.fillZone(n, k.Face.DipDirection()-89.9, k.Face.DipDirection()+89.9, wedgeFill)
+	k.fillZone(n, k.Face.DipDirection()-k.LateralLimit, k.Face.DipDirection()+k.LateralLimit, slideFill)
 	k.fillTopple(n)
 	drawPrimitive(n)
 
@@ -69,7 +69,7 @@ func (k *KinematicNet) Draw(c draw.Canvas) {
 	n.c.StrokeLines(draw.LineStyle{Color: ink, Width: vg.Points(1)}, circlePath(n, fr, 240))
 	dash := draw.LineStyle{Color: ink, Width: vg.Points(0.8), Dashes: []vg.Length{vg.Points(4), vg.Points(2)}}
 	for _, d := range []float64{-k.LateralLimit, k.LateralLimit} {
-		s, co := geom.SinCosDeg(k.Face.DipDirection + d)
+		s, co := geom.SinCosDeg(k.Face.DipDirection() + d)
 		n.c.StrokeLines(dash, []vg.Point{n.pt(Point{X: s * fr, Y: co * fr}), n.pt(Point{X: s, Y: co})})
 	}
 	n.c.StrokeLines(draw.LineStyle{Color: ink, Width: vg.Points(1.8)}, n.path(k.Proj.GreatCircle(k.Face, 120)))
@@ -121,11 +121,11 @@ func (k *KinematicNet) fillZone(n net, t0, t1 float64, clr color.Color) {
 // toppling limit of the opposite of the face's dip direction, plunges from
 // 90° − ψf + φ to 90°.
 func (k *KinematicNet) fillTopple(n net) {
-	pl := 90 - k.Face.Dip + k.Phi
+	pl := 90 - k.Face.Dip() + k.Phi
 	if pl >= 90 {
 		return
 	}
-	back := k.Face.DipDirection + 180
+	back := k.Face.DipDirection() + 180
 	var poly []Point
 	for t := back - k.ToppleLimit; t <= back+k.ToppleLimit+1e-9; t += k.ToppleLimit / 30 {
 		poly = append(poly, k.Proj.Project(geom.Line{Trend: geom.Azimuth(t), Plunge: pl}))

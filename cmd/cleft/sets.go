@@ -221,9 +221,9 @@ func (g *grouping) statRows() [][]string {
 	var rows [][]string
 	for k, s := range g.an.Sets {
 		m, wm := s.Raw.MeanPlane(), s.Weighted.MeanPlane()
-		rows = append(rows, []string{setName(k), fmt.Sprint(len(s.Members)), cell(s.WeightedCount), cell(m.Dip), cell(m.DipDirection),
+		rows = append(rows, []string{setName(k), fmt.Sprint(len(s.Members)), cell(s.WeightedCount), cell(m.Dip()), cell(m.DipDirection()),
 			cell(s.Raw.K), cell(s.Raw.Alpha), cell(s.Raw.SphVar), cell(s.Tensor.WoodcockK()), cell(s.Tensor.WoodcockC()),
-			cell(wm.Dip), cell(wm.DipDirection), cell(s.Weighted.K), cell(s.Weighted.Alpha)})
+			cell(wm.Dip()), cell(wm.DipDirection()), cell(s.Weighted.K), cell(s.Weighted.Alpha)})
 	}
 	un := make([]string, len(setColumns))
 	un[0], un[1], un[2] = "unassigned", fmt.Sprint(g.an.Unassigned), cell(g.an.UnassignedWeight)
@@ -244,7 +244,7 @@ func (g *grouping) writeReadings(w io.Writer) error {
 	}
 	rows := [][]string{head}
 	for i, r := range g.readings {
-		row := []string{r.Name, cell(r.Orientation.Dip), cell(r.Orientation.DipDirection), cell(r.Depth), cell(g.weight(i)), g.assigned(i), cell(g.an.AngleToMean[i])}
+		row := []string{r.Name, cell(r.Orientation.Dip()), cell(r.Orientation.DipDirection()), cell(r.Depth), cell(g.weight(i)), g.assigned(i), cell(g.an.AngleToMean[i])}
 		rows = append(rows, append(row, r.Extras...))
 	}
 	return writeCSV(w, rows)

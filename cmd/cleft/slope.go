@@ -106,12 +106,12 @@ func (a *assessment) screenSlope() *slopeScreen {
 		k := planes.PlanarSliding(c.o, sl.Face, phi, sl.LateralLimit)
 		r := slopeRow{test: "planar", planes: c.name, k: k, line: c.o.DipLine(), crack: math.NaN(), waterToF: math.NaN()}
 		if k.Feasible {
-			psiF := planes.ApparentDip(sl.Face, c.o.DipDirection)
+			psiF := planes.ApparentDip(sl.Face, c.o.DipDirection())
 			crack, byDepth := sl.Crack, sl.CrackByDepth
 			if !sl.CrackGiven {
-				crack, byDepth = planes.CriticalCrackDepth(sl.Height, psiF, c.o.Dip), true
+				crack, byDepth = planes.CriticalCrackDepth(sl.Height, psiF, c.o.Dip()), true
 			}
-			b, err := planes.NewPlanarBlock(sl.Height, psiF, topDip(c.o.DipDirection), c.o.Dip, crack, byDepth, sl.UnitWeight)
+			b, err := planes.NewPlanarBlock(sl.Height, psiF, topDip(c.o.DipDirection()), c.o.Dip(), crack, byDepth, sl.UnitWeight)
 			if err != nil {
 				// Kinematically feasible, but the block's geometry is outside
 				// the limit-equilibrium model: say so in the row.

@@ -49,7 +49,7 @@ type limitFacts struct {
 }
 
 func newLeast(name string, p *site.Plane, r planes.Result) leastPlane {
-	return leastPlane{Name: name, Dip: num(p.Orientation.Dip), DipDirection: num(p.Orientation.DipDirection), Depth: num(p.Depth),
+	return leastPlane{Name: name, Dip: num(p.Orientation.Dip()), DipDirection: num(p.Orientation.DipDirection()), Depth: num(p.Depth),
 		State: r.State.String(), EffectiveNormal: num(r.EffectiveNormal), FactorOfSafety: num(r.FactorOfSafety), PressureToSlip: num(r.PressureToSlip)}
 }
 

@@ -88,7 +88,7 @@ func FuzzPlaneReader(f *testing.F) {
 				return
 			}
 			o := p.Orientation
-			if !(o.Dip >= 0 && o.Dip <= 90 && o.DipDirection >= 0 && o.DipDirection < 360 && p.Depth >= 0) || p.Name == "" {
+			if !(o.Dip() >= 0 && o.Dip() <= 90 && o.DipDirection() >= 0 && o.DipDirection() < 360 && p.Depth >= 0) || p.Name == "" {
 				t.Fatalf("plane out of range: %+v", p)
 			}
 			if len(p.Extras) != len(r.ExtraNames) {

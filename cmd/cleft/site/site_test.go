@@ -116,7 +116,7 @@ sets: {seeds: ["70/135", "20/250"], max_angle: 25, line: "100/70", max_weight: 5
 		t.Fatal(err)
 	}
 	c := s.Sets
-	if s.ReadingsFile != "d/r.csv" || len(c.Seeds) != 2 || c.Seeds[1].DipDirection != 250 || c.MaxAngle != 25 || c.Line == nil || c.Line.Plunge != 70 || c.MaxWeight != 5 {
+	if s.ReadingsFile != "d/r.csv" || len(c.Seeds) != 2 || c.Seeds[1].DipDirection() != 250 || c.MaxAngle != 25 || c.Line == nil || c.Line.Plunge != 70 || c.MaxWeight != 5 {
 		t.Errorf("sets %+v, readings %q", c, s.ReadingsFile)
 	}
 	for _, bad := range []struct{ sets, want string }{

@@ -63,13 +63,13 @@ func (s *Site) readSlope(v node) error {
 	} else if !ok {
 		return m.missing("face", " ({dip, dip_direction} of the cut face)")
 	}
-	if sl.Face.Dip == 0 {
+	if sl.Face.Dip() == 0 {
 		return m.vals["face"].errf("a face dipping 0° is not a slope")
 	}
 	if sl.Top, ok, err = orient("top"); err != nil {
 		return err
 	} else if !ok {
-		sl.Top = planes.MustNew(0, sl.Face.DipDirection)
+		sl.Top = planes.MustNew(0, sl.Face.DipDirection())
 		sl.Defaults = append(sl.Defaults, "top = horizontal")
 	}
 	hv, ok := m.get("height")

@@ -83,7 +83,7 @@ func AppendRow(b []byte, f Format, p *site.Plane, r *planes.Result, extras []str
 		b = append(b, "\n{"...)
 	}
 	o := p.Orientation
-	nums := [...]float64{o.Dip, o.DipDirection, p.Depth, r.PorePressure,
+	nums := [...]float64{o.Dip(), o.DipDirection(), p.Depth, r.PorePressure,
 		r.Normal, r.Shear, r.EffectiveNormal,
 		r.SlipTendency, r.NormalisedSlip, r.DilationTendency,
 		r.FactorOfSafety, r.PressureToSlip, r.Rake}
