@@ -65,8 +65,8 @@ func build(dip, dd float64) Orientation {
 	sd, cd := geom.SinCosDeg(dip)
 	sa, ca := geom.SinCosDeg(dd)
 	return Orientation{
-		dip:     dip,
-		dd:      dd,
+		dip:    dip,
+		dd:     dd,
 		built:  true,
 		pole:   r3.Vec{X: -sd * ca, Y: -sd * sa, Z: cd},
 		strike: r3.Vec{X: sa, Y: -ca},

@@ -8,10 +8,10 @@ import (
 	"sort"
 	"strings"
 
-	"cleft/cmd/cleft/site"
-	"cleft/cmd/cleft/table"
 	"cleft/planes"
+	"cleft/planes/site"
 	"cleft/plots"
+	"cleft/plots/table"
 
 	"github.com/spf13/cobra"
 )

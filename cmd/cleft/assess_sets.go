@@ -6,8 +6,8 @@ import (
 	"math"
 	"sort"
 
-	"cleft/cmd/cleft/site"
 	"cleft/planes"
+	"cleft/planes/site"
 	"cleft/plots"
 )
 

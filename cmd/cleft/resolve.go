@@ -4,8 +4,8 @@ import (
 	"bufio"
 	"io"
 
-	"cleft/cmd/cleft/site"
-	"cleft/cmd/cleft/table"
+	"cleft/planes/site"
+	"cleft/plots/table"
 
 	"github.com/spf13/cobra"
 )

@@ -8,7 +8,7 @@ import (
 	"strings"
 
 	"cleft/cmd/cleft/demo"
-	"cleft/cmd/cleft/site"
+	"cleft/planes/site"
 
 	"github.com/spf13/cobra"
 )

@@ -7,9 +7,9 @@ import (
 	"strconv"
 	"strings"
 
-	"cleft/cmd/cleft/site"
 	"cleft/insitu/geom"
 	"cleft/planes"
+	"cleft/planes/site"
 	"cleft/plots"
 
 	"github.com/spf13/cobra"

@@ -6,9 +6,9 @@ import (
 	"runtime"
 	"sync"
 
-	"cleft/cmd/cleft/site"
-	"cleft/cmd/cleft/table"
 	"cleft/planes"
+	"cleft/planes/site"
+	"cleft/plots/table"
 )
 
 // batchSize is the number of planes read, resolved and written together.

@@ -8,8 +8,8 @@ import (
 	"strconv"
 	"strings"
 
-	"cleft/cmd/cleft/site"
 	"cleft/insitu"
+	"cleft/planes/site"
 
 	"github.com/spf13/cobra"
 )

@@ -6,8 +6,8 @@ import (
 	"sort"
 	"strings"
 
-	"cleft/cmd/cleft/site"
 	"cleft/planes"
+	"cleft/planes/site"
 )
 
 // summaryFacts are the figures of the summary: printed by assess, written

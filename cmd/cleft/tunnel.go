@@ -6,11 +6,11 @@ import (
 	"math"
 	"strings"
 
-	"cleft/cmd/cleft/site"
 	"cleft/insitu"
 	"cleft/insitu/geom"
 	"cleft/insitu/opening"
 	"cleft/planes"
+	"cleft/planes/site"
 	"cleft/plots"
 
 	"github.com/spf13/cobra"

@@ -6,8 +6,8 @@ import (
 	"strings"
 	"testing"
 
-	"cleft/cmd/cleft/site"
 	"cleft/planes"
+	"cleft/planes/site"
 )
 
 func TestArcs(t *testing.T) {

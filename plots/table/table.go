@@ -10,8 +10,8 @@ import (
 	"strconv"
 	"unicode/utf8"
 
-	"cleft/cmd/cleft/site"
 	"cleft/planes"
+	"cleft/planes/site"
 )
 
 // Columns are the result columns, in order; extra input columns follow them.

@@ -8,8 +8,8 @@ import (
 	"testing"
 	"unicode/utf8"
 
-	"cleft/cmd/cleft/site"
 	"cleft/planes"
+	"cleft/planes/site"
 )
 
 func FuzzEscaping(f *testing.F) {
