@@ -7,7 +7,7 @@ import (
 	"os"
 	"path/filepath"
 
-	"cleft/cmd/cleft/demo"
+	"cleft/planes/site/demo"
 
 	"github.com/spf13/cobra"
 )

@@ -7,7 +7,7 @@ import (
 	"os"
 	"strings"
 
-	"cleft/cmd/cleft/demo"
+	"cleft/planes/site/demo"
 	"cleft/planes/site"
 
 	"github.com/spf13/cobra"

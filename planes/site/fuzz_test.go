@@ -9,14 +9,14 @@ import (
 	"strings"
 	"testing"
 
-	"cleft/cmd/cleft/demo"
+	"cleft/planes/site/demo"
 )
 
 // seeds adds every file of the top-level testdata/good and testdata/bad
 // folders matching pattern to the fuzz corpus.
 func seeds(f *testing.F, pattern string) {
 	for _, dir := range []string{"good", "bad"} {
-		files, _ := filepath.Glob(filepath.Join("..", "..", "..", "testdata", dir, pattern))
+		files, _ := filepath.Glob(filepath.Join("..", "..", "testdata", dir, pattern))
 		for _, name := range files {
 			data, err := os.ReadFile(name)
 			if err != nil {
