@@ -39,3 +39,20 @@ func (s State) EffectiveRatio() float64 {
 	}
 	return s1 / s3
 }
+
+// LimitCheck is the frictional-limit check of a state: its effective
+// principal ratio against the limit for friction μ.
+type LimitCheck struct {
+	Friction float64 // μ
+	Ratio    float64 // (σ1 − αPp)/(σ3 − αPp): +Inf when σ3' ≤ 0, NaN for no stress
+	Limit    float64 // [√(μ² + 1) + μ]²
+	Exceeds  bool    // Ratio > Limit (an infinite ratio exceeds it; NaN does not)
+}
+
+// CheckLimit checks s against the frictional limit for friction μ > 0. This
+// is the one place where cleft decides that a state exceeds the limit.
+func CheckLimit(s State, mu float64) LimitCheck {
+	c := LimitCheck{Friction: mu, Ratio: s.EffectiveRatio(), Limit: FrictionalLimit(mu)}
+	c.Exceeds = c.Ratio > c.Limit
+	return c
+}

@@ -51,3 +51,21 @@ func TestEffectiveRatio(t *testing.T) {
 		t.Errorf("σ3' = 0: ratio = %v, want +Inf", got)
 	}
 }
+
+func TestCheckLimit(t *testing.T) {
+	// Jaeger & Cook (1979); Zoback (2007) (read): for μ = 0.6 the limit of
+	// (σ1 − Pp)/(σ3 − Pp) is 3.1 (3.1194). Dry states just either side of it,
+	// one with σ3' = 0, and the empty state (derived).
+	for _, c := range []struct {
+		name    string
+		s1, s3  float64
+		exceeds bool
+	}{
+		{"below", 31, 10, false}, {"above", 31.3, 10, true}, {"σ3' = 0", 10, 0, true}, {"no stress", 0, 0, false},
+	} {
+		s := NewState(Andersonian(c.s1, c.s3, c.s3, 0), 100, 0, 1)
+		if got := CheckLimit(s, 0.6); got.Exceeds != c.exceeds || math.Abs(got.Limit-3.1194) > 5e-5 {
+			t.Errorf("%s: %+v", c.name, got)
+		}
+	}
+}

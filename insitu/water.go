@@ -9,7 +9,8 @@ import (
 const Gravity = 9.81
 
 // Hydrostatic is the pore-pressure gradient of fresh water,
-// 1000 kg/m³ × 9.81 m/s² = 0.00981 MPa/m (common practice).
+// 1000 kg/m³ × 9.81 m/s² = 0.00981 MPa/m (common practice); the same number
+// is the unit weight of water γw in MN/m³, used for water forces on blocks.
 const Hydrostatic = 0.00981
 
 // DensityGradient returns the vertical stress gradient in MPa/m of rock of

@@ -8,6 +8,7 @@ import (
 	"sync"
 
 	"cleft/planes"
+	"cleft/planes/sets"
 
 	"gonum.org/v1/gonum/spatial/r3"
 	"gonum.org/v1/plot/vg"
@@ -37,14 +38,17 @@ type DensityNet struct {
 	Sets    []SetMark
 	Levels  []float64 // contour levels in σ; nil for 2, 4, 6, …
 
-	Field *Field // the density, computed by Draw
-	kamb  planes.Kamb
+	// Field is the density at every node of the net and Kamb its counting,
+	// from NewDensityField: the caller computes them (FieldSize gives a
+	// resolution to match the figure).
+	Field *Field
+	Kamb  sets.Kamb
 }
 
 // NewDensityField evaluates the Kamb density of the poles at every node of
 // an n × n net grid, in parallel over rows; nodes outside the primitive take
 // the value of the primitive point on their radius.
-func NewDensityField(p Projection, poles []r3.Vec, weights []float64, n int) (*Field, planes.Kamb) {
+func NewDensityField(p Projection, poles []r3.Vec, weights []float64, n int) (*Field, sets.Kamb) {
 	total := float64(len(poles))
 	if weights != nil { // weights scaled to sum to the number of readings
 		sw := 0.0
@@ -57,7 +61,7 @@ func NewDensityField(p Projection, poles []r3.Vec, weights []float64, n int) (*F
 		}
 		weights = scaled
 	}
-	k := planes.NewKamb(total)
+	k := sets.NewKamb(total)
 	f := &Field{N: n, Values: make([]float64, n*n)}
 	rows := make(chan int, n)
 	for j := range n {
@@ -104,9 +108,8 @@ func (d *DensityNet) Draw(c draw.Canvas) {
 	side := min(body.Max.X-body.Min.X-vg.Points(150), body.Max.Y-body.Min.Y)
 	label := vg.Points(14)
 	n := net{c: &c, cx: body.Min.X + side/2, cy: body.Max.Y - side/2, r: side/2 - label}
-	size := FieldSize(2 * n.r)
-	if d.Field == nil || d.Field.N != size {
-		d.Field, d.kamb = NewDensityField(d.Proj, d.Poles, d.Weights, size)
+	if d.Field == nil {
+		panic("plots: DensityNet.Field is nil: compute it with NewDensityField")
 	}
 	hi := math.Max(6, math.Ceil(d.Field.Max/2)*2)
 	var ramp Ramp
@@ -180,7 +183,7 @@ func (d *DensityNet) drawKey(c draw.Canvas, hi float64) {
 		c.FillText(tick, vg.Point{X: x + barW + vg.Points(5), Y: yy}, fmt.Sprintf("%gσ", l))
 	}
 	note := textStyle(7, false, grey)
-	k := d.kamb
+	k := d.Kamb
 	for i, t := range []string{
 		fmt.Sprintf("counting cone %.1f° (%.1f%% of the net)", k.Theta, 100*k.Area),
 		fmt.Sprintf("uniform scatter: %.1f poles = 3σ, σ = %.2f", k.Expected, k.Sigma),

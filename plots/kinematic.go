@@ -7,6 +7,7 @@ import (
 
 	"cleft/insitu/geom"
 	"cleft/planes"
+	"cleft/planes/slope"
 
 	"gonum.org/v1/plot/vg"
 	"gonum.org/v1/plot/vg/draw"
@@ -20,8 +21,8 @@ type KinItem struct {
 	Line         geom.Line
 	Intersection bool // a wedge's line, else a plane's dip vector
 	Feasible     bool
-	Toppling     bool             // feasible for flexural toppling (dip vectors only)
-	Fails        planes.Condition // of the sliding test (planar or wedge), when not feasible
+	Toppling     bool            // feasible for flexural toppling (dip vectors only)
+	Fails        slope.Condition // of the sliding test (planar or wedge), when not feasible
 }
 
 // KinematicNet is the kinematic stereonet of a cut slope, drawn with lines
@@ -100,7 +101,7 @@ func (k *KinematicNet) Draw(c draw.Canvas) {
 func (k *KinematicNet) fillZone(n net, t0, t1 float64, clr color.Color) {
 	var outer, inner []Point
 	for t := t0; t <= t1+1e-9; t += (t1 - t0) / 90 {
-		app := planes.ApparentDip(k.Face, t)
+		app := slope.ApparentDip(k.Face, t)
 		if app <= k.Phi {
 			continue
 		}
@@ -149,10 +150,10 @@ func kinGlyph(c *draw.Canvas, it KinItem, at vg.Point) {
 		fill, edge = toppleInk, poleInk
 	case it.Feasible:
 		fill, edge = warning, poleInk
-	case it.Fails&planes.Daylight != 0:
-	case it.Fails&planes.Friction != 0:
+	case it.Fails&slope.Daylight != 0:
+	case it.Fails&slope.Friction != 0:
 		fill = light
-	case it.Fails&planes.Lateral != 0:
+	case it.Fails&slope.Lateral != 0:
 		fill = grey
 	}
 	r := vg.Points(3)
@@ -189,10 +190,10 @@ func (k *KinematicNet) drawKey(c draw.Canvas) {
 	}
 	row(func(a vg.Point) { kinGlyph(&c, KinItem{Feasible: true}, a) }, fmt.Sprintf("dip vector, planar sliding feasible (%d)", count(func(i KinItem) bool { return !i.Intersection && i.Feasible })))
 	row(func(a vg.Point) { kinGlyph(&c, KinItem{Toppling: true}, a) }, fmt.Sprintf("dip vector, flexural toppling feasible (%d)", count(func(i KinItem) bool { return i.Toppling })))
-	row(func(a vg.Point) { kinGlyph(&c, KinItem{Fails: planes.Lateral}, a) }, "dip vector, sliding only beyond the lateral limit")
+	row(func(a vg.Point) { kinGlyph(&c, KinItem{Fails: slope.Lateral}, a) }, "dip vector, sliding only beyond the lateral limit")
 	row(func(a vg.Point) { kinGlyph(&c, KinItem{Intersection: true, Feasible: true}, a) }, fmt.Sprintf("line of intersection, wedge feasible (%d)", count(func(i KinItem) bool { return i.Intersection && i.Feasible })))
-	row(func(a vg.Point) { kinGlyph(&c, KinItem{Intersection: true, Fails: planes.Friction}, a) }, "grey: daylights, flatter than φ")
-	row(func(a vg.Point) { kinGlyph(&c, KinItem{Intersection: true, Fails: planes.Daylight}, a) }, "open: does not daylight")
+	row(func(a vg.Point) { kinGlyph(&c, KinItem{Intersection: true, Fails: slope.Friction}, a) }, "grey: daylights, flatter than φ")
+	row(func(a vg.Point) { kinGlyph(&c, KinItem{Intersection: true, Fails: slope.Daylight}, a) }, "open: does not daylight")
 	row(func(a vg.Point) {
 		c.StrokeLine2(draw.LineStyle{Color: ink, Width: vg.Points(1.8)}, a.X-6, a.Y, a.X+6, a.Y)
 	}, "face great circle: lines beyond it daylight")

@@ -43,21 +43,24 @@ type Stereonet struct {
 	// of joint sets), named at their east end.
 	Means []Pole
 
-	// Field is the tendency field, computed by Draw at the resolution the
-	// canvas needs (FieldSize) and kept for inspection.
+	// Field is the measure for every orientation at Depth, from NewField
+	// with State, Criterion, Measure and Proj: the caller computes it
+	// (FieldSize gives a resolution to match the figure). Required.
 	Field *Field
 
 	slipLine bool // some orientation reaches FS = 1 at Depth
 }
 
-// FieldSize returns the grid size for a net of the given diameter: about
-// one node per PNG pixel, between 150 and 400.
-func FieldSize(diameter vg.Length) int {
-	n := int(float64(diameter/vg.Inch) * PNGDPI)
+// FieldSize returns the grid size for a net in a figure of w × h: about one
+// node per PNG pixel of the net's diameter, between 150 and 400. The net
+// takes the height left under the title, or the width left beside the key.
+func FieldSize(w, h vg.Length) int {
+	d := min(w-vg.Points(24+150), h-vg.Points(24+60)) - vg.Points(28)
+	n := int(float64(d/vg.Inch) * PNGDPI)
 	return max(150, min(400, n))
 }
 
-// Scale returns the value range of the colour bar.
+// Scale returns the value range of the colour bar. Field must be set.
 func (s *Stereonet) Scale() (lo, hi float64) {
 	m := s.Field.Measure
 	fmin, fmax := s.Field.Min, s.Field.Max
@@ -148,8 +151,8 @@ func (s *Stereonet) Draw(c draw.Canvas) {
 	side := min(body.Max.X-body.Min.X-right, body.Max.Y-body.Min.Y)
 	label := vg.Points(14) // room for the N mark and tick labels
 	n := net{c: &c, cx: body.Min.X + side/2, cy: body.Max.Y - side/2, r: side/2 - label}
-	if s.Field == nil || s.Field.N != FieldSize(2*n.r) {
-		s.Field = NewField(s.State, s.Criterion, s.Measure, s.Proj, FieldSize(2*n.r))
+	if s.Field == nil {
+		panic("plots: Stereonet.Field is nil: compute it with NewField")
 	}
 	lo, hi := s.Scale()
 	s.drawField(n, lo, hi)

@@ -2,15 +2,12 @@ package main
 
 import (
 	"fmt"
-	"io"
 	"math"
-	"sort"
 	"strings"
 
 	"cleft/planes"
+	"cleft/planes/assess"
 	"cleft/plots"
-
-	"gonum.org/v1/plot/vg"
 )
 
 // figureOptions are the choices shared by cleft plot and cleft assess.
@@ -25,40 +22,26 @@ type figureOptions struct {
 
 func (o figureOptions) with(m plots.Measure) figureOptions { o.measure = m; return o }
 
-// figureDepth is the depth of the stereonet field and the Mohr diagram when
-// none is asked for: the site's depth, else the median plane depth.
-func (a *assessment) figureDepth() float64 {
-	if a.site.HasDepth {
-		return a.site.Depth
-	}
-	ds := make([]float64, len(a.planes))
-	for i, p := range a.planes {
-		ds[i] = p.Depth
-	}
-	sort.Float64s(ds)
-	return ds[len(ds)/2]
-}
-
 // depthFor is the depth asked for in o, or the figure depth.
-func (a *assessment) depthFor(o figureOptions) float64 {
+func depthFor(a *assess.Assessment, o figureOptions) float64 {
 	if math.IsNaN(o.depth) {
-		return a.figureDepth()
+		return a.FigureDepth()
 	}
 	return o.depth
 }
 
 // traced reports whether plane i gets its great circle drawn.
-func (a *assessment) traced(i int, which string) bool {
+func traced(a *assess.Assessment, i int, which string) bool {
 	switch which {
 	case "none":
 		return false
 	case "all":
 		return true
 	case "unstable", "":
-		return a.results[i].State != planes.Stable
+		return a.Results[i].State != planes.Stable
 	}
 	for _, n := range strings.Split(which, ",") {
-		if strings.TrimSpace(n) == a.planes[i].Name {
+		if strings.TrimSpace(n) == a.Planes[i].Name {
 			return true
 		}
 	}
@@ -66,13 +49,13 @@ func (a *assessment) traced(i int, which string) bool {
 }
 
 // checkTraces reports names in --great-circles that match no plane.
-func (a *assessment) checkTraces(which string) error {
+func checkTraces(a *assess.Assessment, which string) error {
 	switch which {
 	case "none", "all", "unstable", "":
 		return nil
 	}
 	names := map[string]bool{}
-	for _, p := range a.planes {
+	for _, p := range a.Planes {
 		names[p.Name] = true
 	}
 	for _, n := range strings.Split(which, ",") {
@@ -83,61 +66,51 @@ func (a *assessment) checkTraces(which string) error {
 	return nil
 }
 
-func (a *assessment) stereonet(o figureOptions) *plots.Stereonet {
-	z := a.depthFor(o)
+// stereonet builds the tendency stereonet for a figure of w × h, its field
+// computed at the figure depth with the site's water model and strength.
+func stereonet(a *assess.Assessment, o figureOptions, w, h float64) *plots.Stereonet {
+	z := depthFor(a, o)
 	st := &plots.Stereonet{
-		Site:      a.site.Name,
-		Model:     a.site.Summary(),
+		Site:      a.Site.Name,
+		Model:     a.Site.Summary(),
 		Depth:     z,
-		State:     a.site.Model.At(z),
-		Criterion: a.site.Criterion,
+		State:     a.Site.Model.At(z),
+		Criterion: a.Site.Criterion,
 		Measure:   o.measure,
 		Proj:      o.proj,
 		Grid:      o.grid,
 		Contours:  o.contours,
 	}
-	for i, p := range a.planes {
-		st.Poles = append(st.Poles, plots.Pole{Name: p.Name, Orientation: p.Orientation, Result: a.results[i], Trace: a.traced(i, o.traces)})
+	st.Field = plots.NewField(st.State, st.Criterion, st.Measure, st.Proj, plots.FieldSize(cm(w, 0), cm(h, 0)))
+	for i, p := range a.Planes {
+		st.Poles = append(st.Poles, plots.Pole{Name: p.Name, Orientation: p.Orientation, Result: a.Results[i], Trace: traced(a, i, o.traces)})
 	}
 	if o.traces != "none" {
-		for _, s := range a.sets {
-			st.Means = append(st.Means, plots.Pole{Name: s.name, Orientation: s.plane.Orientation, Result: s.result})
+		for _, s := range a.Sets {
+			st.Means = append(st.Means, plots.Pole{Name: s.Name, Orientation: s.Plane.Orientation, Result: s.Result})
 		}
 	}
 	return st
 }
 
-// writeFigure writes f to path in the format its extension names.
-func writeFigure(f plots.Figure, w, h vg.Length, path string) error {
-	format, err := plots.FormatOf(path)
-	if err != nil {
-		return usageError{err}
-	}
-	return writeFile(path, func(out io.Writer) error {
-		if err := plots.Write(f, w, h, format, out); err != nil {
-			return fmt.Errorf("%s: %w", path, err)
-		}
-		return nil
-	})
-}
-
 // mohr builds the Mohr diagram at the figure depth: every plane resolved at
 // that depth (site.Resolver.ResolveAt), the site's envelope and one for each
 // distinct per-plane Coulomb criterion.
-func (a *assessment) mohr(o figureOptions) *plots.Mohr {
-	z := a.depthFor(o)
+func mohr(a *assess.Assessment, o figureOptions) *plots.Mohr {
+	z := depthFor(a, o)
+	s := a.Site
 	m := &plots.Mohr{
-		Site:  a.site.Name,
-		Model: a.site.Summary(),
+		Site:  s.Name,
+		Model: s.Summary(),
 		Depth: z,
-		State: a.site.Model.At(z),
+		State: s.Model.At(z),
 		Note:  "Every plane at this depth by its orientation; planes with their own pore pressure keep its excess over the water model",
 	}
-	m.Envelopes = append(m.Envelopes, plots.Envelope{Label: "site strength: " + a.site.Criterion.String(), Criterion: a.site.Criterion})
-	seen := map[string]bool{a.site.Criterion.String(): true}
-	rv := a.site.Resolver()
-	for i := range a.planes {
-		p := &a.planes[i]
+	m.Envelopes = append(m.Envelopes, plots.Envelope{Label: "site strength: " + s.Criterion.String(), Criterion: s.Criterion})
+	seen := map[string]bool{s.Criterion.String(): true}
+	rv := s.Resolver()
+	for i := range a.Planes {
+		p := &a.Planes[i]
 		var r planes.Result
 		c := rv.ResolveAt(p, z, &r)
 		m.Points = append(m.Points, plots.MohrPoint{Name: p.Name, Result: r})
@@ -147,4 +120,46 @@ func (a *assessment) mohr(o figureOptions) *plots.Mohr {
 		}
 	}
 	return m
+}
+
+// figures are the assessment's figures, built once for the files and the
+// report: the slip and dilation stereonets and the Mohr diagram at the
+// figure depth, then those of the readings, the tunnel and the slope.
+func (a *screened) figures() []*namedFigure {
+	fo := figureOptions{depth: math.NaN(), proj: plots.EqualArea, traces: "unstable"}
+	z := a.FigureDepth()
+	figs := []*namedFigure{
+		{file: "stereonet-slip",
+			title: fmt.Sprintf("Slip tendency of every plane, and of every orientation at %g m", z),
+			caption: fmt.Sprintf("Lower-hemisphere equal-area net of poles to planes. Each pole is coloured by the plane's own slip tendency Ts = τ/σn' at its own depth and shaped by its state (circle stable, triangle critical, square with a cross opening). The paler background is Ts for every orientation at %g m with the site's water model and strength; thin lines are its contours, the dark red line (if any) is where the factor of safety is 1 and orientations past it would slip. Black symbols are the principal stress axes; great circles are drawn for the critical and opening planes, dashed ones for the mean planes of the joint sets. %s",
+				z, traceNote(a.Assessment)),
+			fig: stereonet(a.Assessment, fo.with(plots.SlipTendency), 19, 13.5), w: cm(19, 0), h: cm(13.5, 0)},
+		{file: "stereonet-dilation",
+			title:   fmt.Sprintf("Dilation tendency of every plane, and of every orientation at %g m", z),
+			caption: "As Figure 1 for the dilation tendency Td = (σ1 − σn)/(σ1 − σ3): the light end marks the planes nearest to opening, the likely water paths.",
+			fig:     stereonet(a.Assessment, fo.with(plots.DilationTendency), 19, 13.5), w: cm(19, 0), h: cm(13.5, 0)},
+		{file: "mohr",
+			title:   fmt.Sprintf("Mohr diagram of effective stress at %g m", z),
+			caption: fmt.Sprintf("The three effective Mohr circles at %g m and every plane at that depth by its orientation (planes with their own pore pressure keep its excess over the water model). Red lines are the strength envelopes in use. The arrow shows the change in pore pressure that brings the most critical plane (opening planes aside) to its envelope. Both axes have the same scale.", z),
+			fig:     mohr(a.Assessment, fo), w: cm(17, 0), h: cm(12, 0)},
+	}
+	if a.Grouping != nil {
+		figs = append(figs, densityFigure(a.Grouping, a.Site.Name, plots.EqualArea))
+	}
+	if a.tunnel != nil {
+		figs = append(figs, tunnelFigures(a.Site, a.tunnel, a.tunnel.Worst())...)
+	}
+	if a.slope != nil {
+		figs = append(figs, slopeFigure(a.Site.Name, a.slope))
+	}
+	return figs
+}
+
+func traceNote(a *assess.Assessment) string {
+	for i := range a.Planes {
+		if traced(a, i, "unstable") {
+			return ""
+		}
+	}
+	return "No plane is critical or opening, so no great circle is drawn."
 }

@@ -2,11 +2,16 @@ package main
 
 import (
 	"bufio"
-	"encoding/csv"
+	"bytes"
 	"fmt"
 	"io"
 	"os"
 	"path/filepath"
+
+	"cleft/plots"
+	"cleft/plots/table"
+
+	"gonum.org/v1/plot/vg"
 )
 
 // writeFile writes path through fn atomically: into a temporary file in the
@@ -50,58 +55,94 @@ func unwrapPath(err error) error {
 	return err
 }
 
-// writeCSV writes rows with encoding/csv.
-func writeCSV(w io.Writer, rows [][]string) error {
-	cw := csv.NewWriter(w)
-	if err := cw.WriteAll(rows); err != nil {
-		return err
-	}
-	return cw.Error()
-}
-
 // namedTable is an output file and the function that writes it.
 type namedTable struct {
 	name  string
 	write func(io.Writer) error
 }
 
-// writeTables writes each table into dir; wrote, if not nil, collects the
-// paths.
-func writeTables(dir string, ts []namedTable, wrote *[]string) error {
+// csvTable is a namedTable of rows written as CSV.
+func csvTable(name string, rows [][]string) namedTable {
+	return namedTable{name, func(w io.Writer) error { return table.WriteCSV(w, rows) }}
+}
+
+// outputs collects the paths written into one folder.
+type outputs struct {
+	dir   string
+	wrote []string
+}
+
+// tables writes each table into the folder.
+func (o *outputs) tables(ts ...namedTable) error {
 	for _, t := range ts {
-		p := filepath.Join(dir, t.name)
+		p := filepath.Join(o.dir, t.name)
 		if err := writeFile(p, t.write); err != nil {
 			return err
 		}
-		if wrote != nil {
-			*wrote = append(*wrote, p)
-		}
+		o.wrote = append(o.wrote, p)
 	}
 	return nil
 }
 
-// writeFigures writes each figure into dir as SVG and PNG; wrote, if not
-// nil, collects the paths.
-func writeFigures(dir string, figs []namedFigure, wrote *[]string) error {
+// namedFigure is a figure with its file name (without extension), its size,
+// and for the report its title and caption.
+type namedFigure struct {
+	file           string
+	title, caption string
+	fig            plots.Figure
+	w, h           vg.Length
+	svg            []byte // the SVG document, once written
+}
+
+// figures writes each figure into the folder as SVG and PNG, keeping the
+// SVG bytes for the report.
+func (o *outputs) figures(figs []*namedFigure) error {
 	for _, f := range figs {
-		for _, ext := range []string{".svg", ".png"} {
-			p := filepath.Join(dir, f.file+ext)
-			if err := writeFigure(f.Figure, f.W, f.H, p); err != nil {
-				return err
-			}
-			if wrote != nil {
-				*wrote = append(*wrote, p)
-			}
+		var b bytes.Buffer
+		if err := plots.Write(f.fig, f.w, f.h, "svg", &b); err != nil {
+			return fmt.Errorf("%s: %w", f.file, err)
 		}
+		f.svg = b.Bytes()
+		p := filepath.Join(o.dir, f.file+".svg")
+		if err := writeFile(p, func(w io.Writer) error { _, err := w.Write(f.svg); return err }); err != nil {
+			return err
+		}
+		o.wrote = append(o.wrote, p)
+		p = filepath.Join(o.dir, f.file+".png")
+		if err := writeFigure(f.fig, f.w, f.h, p); err != nil {
+			return err
+		}
+		o.wrote = append(o.wrote, p)
 	}
 	return nil
 }
 
-// baseNames returns the file names of paths.
-func baseNames(paths []string) []string {
-	out := make([]string, len(paths))
-	for i, p := range paths {
+// names returns the file names written.
+func (o *outputs) names() []string {
+	out := make([]string, len(o.wrote))
+	for i, p := range o.wrote {
 		out[i] = filepath.Base(p)
 	}
 	return out
+}
+
+// writeFigure writes f to path in the format its extension names.
+func writeFigure(f plots.Figure, w, h vg.Length, path string) error {
+	format, err := plots.FormatOf(path)
+	if err != nil {
+		return usageError{err}
+	}
+	return writeFile(path, func(out io.Writer) error {
+		if err := plots.Write(f, w, h, format, out); err != nil {
+			return fmt.Errorf("%s: %w", path, err)
+		}
+		return nil
+	})
+}
+
+func cm(v, def float64) vg.Length {
+	if v == 0 {
+		v = def
+	}
+	return vg.Length(v) * vg.Centimeter
 }

@@ -4,10 +4,10 @@ import (
 	"math"
 	"strings"
 
+	"cleft/planes/assess"
 	"cleft/plots"
 
 	"github.com/spf13/cobra"
-	"gonum.org/v1/plot/vg"
 )
 
 type plotOptions struct {
@@ -99,26 +99,25 @@ func runPlot(o plotOptions, cmd *cobra.Command) error {
 	if err != nil {
 		return err
 	}
-	a, err := assess(s)
+	a, err := assess.New(s)
 	if err != nil {
 		return err
 	}
-	if err := a.checkTraces(o.traces); err != nil {
+	if err := checkTraces(a, o.traces); err != nil {
 		return err
 	}
 	fo := figureOptions{measure: m, depth: o.depth, proj: proj, grid: o.grid, contours: o.contours, traces: o.traces}
-	w, h := cm(o.width, 19), cm(o.height, 13.5)
-	var fig plots.Figure = a.stereonet(fo)
 	if o.kind == "mohr" {
-		w, h = cm(o.width, 17), cm(o.height, 12)
-		fig = a.mohr(fo)
+		return writeFigure(mohr(a, fo), cm(o.width, 17), cm(o.height, 12), o.out)
 	}
-	return writeFigure(fig, w, h, o.out)
+	w, h := or(o.width, 19), or(o.height, 13.5)
+	return writeFigure(stereonet(a, fo, w, h), cm(w, 0), cm(h, 0), o.out)
 }
 
-func cm(v, def float64) vg.Length {
+// or is v, or def when v is 0.
+func or(v, def float64) float64 {
 	if v == 0 {
-		v = def
+		return def
 	}
-	return vg.Length(v) * vg.Centimeter
+	return v
 }

@@ -3,149 +3,208 @@ package main
 import (
 	"fmt"
 	"math"
-	"sort"
 	"strings"
 	"time"
 
-	"cleft/plots"
+	"cleft/insitu"
+	"cleft/planes/assess"
+	"cleft/planes/slope"
+	"cleft/planes/tunnel"
+	"cleft/plots/report"
+	"cleft/plots/words"
 )
 
 // now is the clock of the report header; tests may fix it.
 var now = time.Now
 
 // report builds the effective-stress report of the assessment.
-func (a *assessment) report(example bool, figs []namedFigure) (*plots.Report, error) {
-	s := a.site
-	r := &plots.Report{
+func (a *screened) report(example bool, facts assess.Facts, figs []*namedFigure) *report.Report {
+	s := a.Site
+	r := &report.Report{
 		Site:      s.Name,
-		Generated: now(),
+		Generated: now().UTC().Format("2006-01-02 15:04 MST"),
 		Version:   version,
 		Model:     s.Summary(),
-		Summary:   a.facts().sentences(),
+		Summary:   words.Summary(facts),
 		Notes:     s.Notes,
 		Criterion: s.Criterion.String(),
 		Caution:   strings.TrimPrefix(caution, "Caution: "),
 	}
-	for _, in := range a.inputs {
+	for _, in := range a.Inputs {
 		if example {
 			in.Name += " (built-in demo)"
 		}
-		r.Inputs = append(r.Inputs, in)
+		r.Inputs = append(r.Inputs, report.Input{Name: in.Name, SHA256: in.SHA256})
 	}
 	for _, p := range s.Params {
-		r.Params = append(r.Params, plots.Param{Group: p.Group, Name: p.Name, Value: p.Value, Unit: p.Unit, Source: p.Source, Default: p.Default})
+		r.Params = append(r.Params, report.Param{Group: p.Group, Name: p.Name, Value: p.Value, Unit: p.Unit, Source: p.Source, Default: p.Default})
 	}
-	for _, z := range a.depths {
-		r.States = append(r.States, plots.DepthState{State: s.Model.At(z), Friction: s.Criterion.Friction()})
+	mu := s.Criterion.Friction()
+	for _, z := range a.ReportDepths() {
+		r.States = append(r.States, reportState(s.Model.At(z), mu))
 	}
+	r.Planes, r.BySet = a.planeTable()
+	for _, f := range figs {
+		r.Figures = append(r.Figures, report.Figure{Title: f.title, Caption: f.caption, SVG: f.svg})
+	}
+	if a.slope != nil {
+		r.Slope = slopeReport(a.slope, s.SlopeDefaults)
+	}
+	if a.tunnel != nil {
+		r.Tunnel = tunnelReport(a.tunnel, s.TunnelDefaults)
+	}
+	if a.Grouping != nil {
+		r.Sets = a.setsTable()
+	}
+	return r
+}
+
+// reportState is the stress state at one depth, in words.
+func reportState(st insitu.State, mu float64) report.State {
+	p := st.Principal
+	eff := st.EffectivePrincipal()
+	lc := insitu.CheckLimit(st, mu)
+	out := report.State{Depth: words.Num(st.Depth), PorePressure: words.Fixed(st.PorePressure, 3), Regime: words.Regime(p),
+		Limit: fmt.Sprintf("%s (μ = %s)", words.Fixed(lc.Limit, 3), words.Num(mu)), Exceeds: lc.Exceeds}
+	switch {
+	case math.IsNaN(lc.Ratio):
+		out.Ratio = "undefined (no stress)"
+	case math.IsInf(lc.Ratio, 1):
+		out.Ratio = "∞ (σ3' ≤ 0)"
+	default:
+		out.Ratio = fmt.Sprintf("%.3f", lc.Ratio)
+		out.Within = !lc.Exceeds
+	}
+	for i := range 3 {
+		l := p.Axis(i)
+		out.Principal[i] = report.Principal{Total: words.Fixed(p.Values[i], 3), Effective: words.Fixed(eff[i], 3), Axis: words.Angle(l.Trend, 3) + "/" + words.Angle(l.Plunge, 2)}
+	}
+	return out
+}
+
+// planeTable is the plane table, least stable first, grouped by set (sets in
+// order of their least stable plane) when the planes carry a set column.
+func (a *screened) planeTable() (*report.Table, bool) {
+	t := &report.Table{Columns: []string{"plane", "dip/dip dir.", "depth m", "σn'", "τ", "Ts", "Td", "FS", "ΔPp to slip", "rake °", "sense", "state"},
+		Numeric: []bool{false, true, true, true, true, true, true, true, true, true, false, false}}
 	setCol := -1
-	for i, n := range a.extras {
+	for i, n := range a.Extras {
 		if n == "set" {
 			setCol = i
 		}
 	}
-	r.BySet = setCol >= 0
-	for _, i := range a.ranked() {
-		p := a.planes[i]
-		rp := plots.ReportPlane{Name: p.Name, Orientation: p.Orientation, Depth: p.Depth, Result: a.results[i]}
+	var order []string
+	groups := map[string]*report.Group{}
+	for _, i := range a.Ranked() {
+		p, res := &a.Planes[i], a.Results[i]
+		sense := res.Sense.String()
+		if sense == "" {
+			sense = "—"
+		}
+		row := report.Row{Class: res.State.String(), Cells: []string{p.Name, p.Orientation.String(), words.Num(p.Depth), words.Fixed(res.EffectiveNormal, 3), words.Fixed(res.Shear, 3),
+			words.Fixed(res.SlipTendency, 3), words.Fixed(res.DilationTendency, 3), words.Fixed(res.FactorOfSafety, 2), words.Fixed(res.PressureToSlip, 2), words.Rake(res.Rake), sense, words.StateLabel(res.State)}}
+		set := ""
 		if setCol >= 0 {
-			rp.Set = p.Extras[setCol]
+			set = p.Extras[setCol]
 		}
-		r.Planes = append(r.Planes, rp)
+		g, ok := groups[set]
+		if !ok {
+			g = &report.Group{}
+			groups[set] = g
+			order = append(order, set)
+		}
+		g.Rows = append(g.Rows, row)
 	}
-	if r.BySet { // sets in order of their least stable plane; stable sort keeps the rank
-		first := map[string]int{}
-		for k, p := range r.Planes {
-			if _, ok := first[p.Set]; !ok {
-				first[p.Set] = k
+	for _, set := range order { // in order of each set's least stable plane
+		g := groups[set]
+		name := set
+		if name == "" {
+			name = "(none)"
+		}
+		g.Title = fmt.Sprintf("set %s — %s", name, words.Plural(len(g.Rows), "plane", "planes"))
+		t.Groups = append(t.Groups, *g)
+	}
+	return t, setCol >= 0
+}
+
+// setsTable is the table of the joint sets: statistics, how they were found,
+// and the stress on each mean plane.
+func (a *screened) setsTable() *report.Table {
+	t := &report.Table{
+		Notes:   []string{words.Grouping(a.Grouping) + " Statistics after Fisher (1953) — mean plane, concentration K, 95 % cone α95 — and Woodcock (1977) K of the orientation tensor (above 1 a cluster, below 1 a girdle). The stress is resolved on each set's mean plane at the median depth of its readings."},
+		Columns: []string{"set", "readings", "weighted", "mean plane", "pole", "K", "α95 °", "Woodcock K", "depth m", "σn'", "τ", "Ts", "FS", "ΔPp to slip", "state"},
+		Numeric: []bool{false, true, true, true, true, true, true, true, true, true, true, true, true, true, false},
+	}
+	for _, st := range a.Sets {
+		r, f := st.Result, st.Set.Raw
+		pole := f.MeanPole()
+		t.Rows = append(t.Rows, report.Row{Class: r.State.String(), Cells: []string{st.Name, fmt.Sprint(len(st.Set.Members)), words.Fixed(st.Set.WeightedCount, 1),
+			f.MeanPlane().String(), fmt.Sprintf("%03.0f/%02.0f", pole.Trend, pole.Plunge), words.Fixed(f.K, 1), words.Fixed(f.Alpha, 1), words.Fixed(st.Set.Tensor.WoodcockK(), 2),
+			words.Num(st.Plane.Depth), words.Fixed(r.EffectiveNormal, 3), words.Fixed(r.Shear, 3), words.Fixed(r.SlipTendency, 3), words.Fixed(r.FactorOfSafety, 2),
+			words.Fixed(r.PressureToSlip, 2), words.StateLabel(r.State)}})
+	}
+	return t
+}
+
+// slopeReport is the slope screening as the report shows it: the settings
+// and defaults, the counts, and the feasible cases.
+func slopeReport(sc *slope.Screening, defaults []string) *report.Table {
+	lines := words.SlopeLines(sc)
+	t := &report.Table{Notes: lines[:2], Empty: "No test is kinematically feasible for this face."}
+	if len(defaults) > 0 {
+		t.Notes = append(t.Notes, "Defaults applied: "+strings.Join(defaults, "; ")+".")
+	}
+	t.Notes = append(t.Notes, "The feasible cases (every test, feasible or not, with the condition that failed, is in slope.csv):")
+	t.Columns = []string{"test", "planes", "mode", "line", "crack depth m"}
+	t.Numeric = []bool{false, false, false, true, true}
+	for _, f := range sc.Slope.CrackFill {
+		t.Columns = append(t.Columns, fmt.Sprintf("FS, crack %g%% full", 100*f))
+		t.Numeric = append(t.Numeric, true)
+	}
+	t.Columns = append(t.Columns, "water to FS = 1, m")
+	t.Numeric = append(t.Numeric, true)
+	for _, c := range sc.Cases {
+		if !c.Feasible {
+			continue
+		}
+		line := ""
+		if c.Test == slope.WedgeTest && c.HasLine {
+			line = fmt.Sprintf("%03.0f/%02.0f", c.Line.Trend, c.Line.Plunge)
+		}
+		row := []string{c.Test.String(), sc.Names(c), words.Reason(sc, c), line, words.Fixed(c.CrackDepth, 1)}
+		for i := range sc.Slope.CrackFill {
+			v := math.NaN()
+			if i < len(c.FS) {
+				v = c.FS[i]
 			}
+			row = append(row, words.Fixed(v, 2))
 		}
-		sort.SliceStable(r.Planes, func(i, j int) bool { return first[r.Planes[i].Set] < first[r.Planes[j].Set] })
-	}
-	for _, f := range figs {
-		r.Figures = append(r.Figures, f.ReportFigure)
-	}
-	if a.slope != nil {
-		r.Slope = a.slope.reportTable()
-	}
-	if a.tunnel != nil {
-		r.Tunnel = a.tunnel.reportTable()
-	}
-	if g := a.grouping; g != nil {
-		r.SetNote = g.explain()
-		for _, st := range a.sets {
-			r.Sets = append(r.Sets, plots.ReportSet{Name: st.name, Count: len(st.set.Members), WeightedCount: st.set.WeightedCount,
-				Stats: st.set.Raw, WoodcockK: st.set.Tensor.WoodcockK(), Depth: st.plane.Depth, Result: st.result})
+		w := words.Fixed(c.WaterToFail, 1)
+		if c.Test == slope.PlanarTest && math.IsNaN(c.WaterToFail) {
+			w = "not reached"
 		}
+		t.Rows = append(t.Rows, report.Row{Cells: append(row, w)})
 	}
-	return r, nil
+	return t
 }
 
-// namedFigure is a figure of the assessment with its file name.
-type namedFigure struct {
-	file string // without extension
-	plots.ReportFigure
-}
-
-// figures are the assessment's figures, built once for the files and the
-// report: the slip and dilation stereonets and the Mohr diagram at the
-// figure depth.
-func (a *assessment) figures() []namedFigure {
-	fo := figureOptions{depth: math.NaN(), proj: plots.EqualArea, traces: "unstable"}
-	z := a.figureDepth()
-	figs := []namedFigure{
-		{"stereonet-slip", plots.ReportFigure{
-			Title: fmt.Sprintf("Slip tendency of every plane, and of every orientation at %g m", z),
-			Caption: fmt.Sprintf("Lower-hemisphere equal-area net of poles to planes. Each pole is coloured by the plane's own slip tendency Ts = τ/σn' at its own depth and shaped by its state (circle stable, triangle critical, square with a cross opening). The paler background is Ts for every orientation at %g m with the site's water model and strength; thin lines are its contours, the dark red line (if any) is where the factor of safety is 1 and orientations past it would slip. Black symbols are the principal stress axes; great circles are drawn for the critical and opening planes, dashed ones for the mean planes of the joint sets. %s",
-				z, traceNote(a)),
-			Figure: a.stereonet(fo.with(plots.SlipTendency)), W: cm(0, 19), H: cm(0, 13.5)}},
-		{"stereonet-dilation", plots.ReportFigure{
-			Title:   fmt.Sprintf("Dilation tendency of every plane, and of every orientation at %g m", z),
-			Caption: "As Figure 1 for the dilation tendency Td = (σ1 − σn)/(σ1 − σ3): the light end marks the planes nearest to opening, the likely water paths.",
-			Figure:  a.stereonet(fo.with(plots.DilationTendency)), W: cm(0, 19), H: cm(0, 13.5)}},
-		{"mohr", plots.ReportFigure{
-			Title:   fmt.Sprintf("Mohr diagram of effective stress at %g m", z),
-			Caption: fmt.Sprintf("The three effective Mohr circles at %g m and every plane at that depth by its orientation (planes with their own pore pressure keep its excess over the water model). Red lines are the strength envelopes in use. The arrow shows the change in pore pressure that brings the most critical plane (opening planes aside) to its envelope. Both axes have the same scale.", z),
-			Figure:  a.mohr(fo), W: cm(0, 17), H: cm(0, 12)}},
+// tunnelReport is the tunnel screening as the report shows it: the notes of
+// the summary, and a table of each plane or set at the station of the
+// largest tangential stress.
+func tunnelReport(sc *tunnel.Screening, defaults []string) *report.Table {
+	notes := words.TunnelLines(sc)
+	if len(defaults) > 0 {
+		notes = append(notes, "Defaults applied: "+strings.Join(defaults, "; ")+".")
 	}
-	if g := a.grouping; g != nil {
-		figs = append(figs, g.densityFigure(a.site.Name, plots.EqualArea))
+	w := sc.Stations[sc.Worst()]
+	notes = append(notes, fmt.Sprintf("At the station of the largest tangential stress, chainage %g m (axis %.0f m deep; every station is in stations.csv, wall.csv and profile.csv):", w.Chainage, w.Depth))
+	t := &report.Table{Notes: notes,
+		Columns: []string{"plane or set", "strike to axis °", "drive", "class", "Ts", "FS", "ΔPp to slip", "wall critical °", "wall opening °"},
+		Numeric: []bool{false, true, false, false, true, true, true, false, false}}
+	for i, tg := range sc.Targets {
+		r := w.Rows[i]
+		t.Rows = append(t.Rows, report.Row{Cells: []string{tg.Name, words.Fixed(r.Drive.StrikeToAxis, 0), r.Drive.Drive.String(), r.Drive.Class.String(),
+			words.Fixed(r.Far.SlipTendency, 3), words.Fixed(r.Far.FactorOfSafety, 2), words.Fixed(r.Far.PressureToSlip, 2), words.ArcsOrNone(r.Critical), words.ArcsOrNone(r.Opening)}})
 	}
-	if a.tunnel != nil {
-		figs = append(figs, a.tunnelFigures(a.tunnel.worst())...)
-	}
-	if a.slope != nil {
-		figs = append(figs, a.slopeFigure())
-	}
-	return figs
-}
-
-// densityFigure is the pole-density stereonet of the readings, named site.
-func (g *grouping) densityFigure(site string, proj plots.Projection) namedFigure {
-	return namedFigure{"sets-density", plots.ReportFigure{
-		Title:   fmt.Sprintf("Pole density of the %d field readings and their %d sets", len(g.readings), len(g.an.Sets)),
-		Caption: "Kamb (1959) counting of the poles (weighted where the readings are), in multiples of σ: a uniform scatter reads 3σ. Dots are poles of readings in a set, rings unassigned readings; each set mean is shown with its 95 % confidence cone (α95, Fisher 1953). " + g.explain(),
-		Figure:  g.densityNet(site, proj), W: cm(0, 19), H: cm(0, 13.5)}}
-}
-
-// slopeFigure is the kinematic stereonet of the slope screening.
-func (a *assessment) slopeFigure() namedFigure {
-	sl := a.site.Slope
-	return namedFigure{"slope-kinematic", plots.ReportFigure{
-		Title:   fmt.Sprintf("Kinematic screening of the %s face", sl.Face),
-		Caption: fmt.Sprintf("Lower-hemisphere equal-area net of lines: dip vectors of the planes (circles) and lines of intersection of every pair (squares). A line daylights when it plots beyond the face's great circle and can slide when it also lies inside the friction circle (φ = %.1f°); the darker zone is planar sliding within ±%g° of the face's dip direction, the paler one wedges. The blue sector is the flexural-toppling envelope. Red and blue symbols are feasible cases; grey ones say which condition fails (open: does not daylight; light: flatter than φ; dark: beyond the lateral limit).", sl.FrictionAngle, sl.LateralLimit),
-		Figure:  a.kinematicNet(a.slope), W: cm(0, 19), H: cm(0, 13.5)}}
-}
-
-func traceNote(a *assessment) string {
-	n := 0
-	for i := range a.planes {
-		if a.traced(i, "unstable") {
-			n++
-		}
-	}
-	if n == 0 {
-		return "No plane is critical or opening, so no great circle is drawn."
-	}
-	return ""
+	return t
 }

@@ -163,7 +163,7 @@ func TestReportSummaryGolden(t *testing.T) {
 	if got != strings.TrimSpace(string(want)) {
 		t.Errorf("summary section:\n%s\nwant:\n%s", got, want)
 	}
-	var f summaryFacts
+	var f summaryDoc
 	readJSON(t, filepath.Join(dir, "summary.json"), &f) // fails on invalid JSON
 	if f.Planes != 139 || f.Critical != 1 || f.Opening != 1 || len(f.LeastStable) != 3 || f.LeastStable[0].Name != "F2" || len(f.Limit.ExceededAt) != 0 || len(f.Sets) != 3 || f.Readings != 133 {
 		t.Errorf("summary.json = %+v", f)

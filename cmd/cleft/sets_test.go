@@ -1,13 +1,14 @@
 package main
 
 import (
+	"cleft/plots/table"
 	"os"
 	"path/filepath"
 	"strings"
 	"testing"
 )
 
-const demoReadings = "demo/readings.csv"
+const demoReadings = "../../planes/site/demo/readings.csv"
 
 func TestSetsCommand(t *testing.T) {
 	dir := t.TempDir()
@@ -21,7 +22,7 @@ func TestSetsCommand(t *testing.T) {
 		}
 	}
 	sets := readCSV(t, filepath.Join(dir, "sets.csv"))
-	if strings.Join(sets[0], ",") != strings.Join(setColumns, ",") || len(sets) != 5 {
+	if strings.Join(sets[0], ",") != strings.Join(table.SetColumns, ",") || len(sets) != 5 {
 		t.Errorf("sets.csv header %v, %d rows", sets[0], len(sets))
 	}
 	rd := readCSV(t, filepath.Join(dir, "readings.csv"))

@@ -68,19 +68,16 @@ func runStress(o stressOptions, stdout io.Writer) error {
 	if len(depths) == 0 {
 		return usagef("give --depth Z (m): the site file has no report.depths or depth")
 	}
-	rows := make([]stressRow, len(depths))
-	for i, z := range depths {
-		rows[i] = stressAt(s, z)
-	}
+	doc := newStressDoc(s, depths)
 	if o.format == "json" {
-		return writeJSON(stdout, stressDoc{Site: s.Name, Model: s.Summary(), Notes: s.Notes, States: rows})
+		return writeJSON(stdout, doc)
 	}
 	var b strings.Builder
 	fmt.Fprintf(&b, "%s — %s\n", s.Name, s.Summary())
 	for _, n := range s.Notes {
 		fmt.Fprintf(&b, "note: %s\n", n)
 	}
-	for _, r := range rows {
+	for _, r := range doc.States {
 		b.WriteByte('\n')
 		r.text(&b)
 	}
@@ -95,6 +92,15 @@ type stressDoc struct {
 	Model  string      `json:"model"`
 	Notes  []string    `json:"notes,omitempty"`
 	States []stressRow `json:"states"`
+}
+
+// newStressDoc is the stress state of s at each depth.
+func newStressDoc(s *site.Site, depths []float64) stressDoc {
+	d := stressDoc{Site: s.Name, Model: s.Summary(), Notes: s.Notes, States: make([]stressRow, len(depths))}
+	for i, z := range depths {
+		d.States[i] = stressAt(s, z)
+	}
+	return d
 }
 
 // stressRow is the stress state at one depth as cleft reports it.
@@ -151,7 +157,7 @@ func stressAt(s *site.Site, z float64) stressRow {
 	eff := st.EffectivePrincipal()
 	fit := p.Regime()
 	phi := p.Shape()
-	mu := s.Criterion.Friction()
+	lc := insitu.CheckLimit(st, s.Criterion.Friction())
 	r := stressRow{
 		Depth:        num(z),
 		Tensor:       tensorJSON{num(st.Total.NN), num(st.Total.EE), num(st.Total.DD), num(st.Total.NE), num(st.Total.ND), num(st.Total.ED)},
@@ -163,14 +169,14 @@ func stressAt(s *site.Site, z float64) stressRow {
 		Andersonian:  fit.Andersonian(),
 		Shape:        num(phi),
 		APhi:         num(insitu.APhi(fit.Regime, phi)),
-		Ratio:        num(st.EffectiveRatio()),
-		Friction:     num(mu),
-		Limit:        num(insitu.FrictionalLimit(mu)),
+		Ratio:        num(lc.Ratio),
+		Friction:     num(lc.Friction),
+		Limit:        num(lc.Limit),
+		Exceeds:      lc.Exceeds,
 	}
 	if p.Isotropic() {
 		r.Regime, r.VerticalAxis, r.AxisTilt, r.Andersonian = "isotropic", "", num(math.NaN()), false
 	}
-	r.Exceeds = float64(r.Ratio) > float64(r.Limit)
 	for i := range 3 {
 		a := p.Axis(i)
 		r.Principal[i] = principalJ{num(p.Values[i]), num(eff[i]), num(a.Trend), num(a.Plunge)}

@@ -6,43 +6,9 @@ import (
 	"strings"
 	"testing"
 
-	"cleft/planes"
 	"cleft/planes/site"
+	"cleft/plots/table"
 )
-
-func TestArcs(t *testing.T) {
-	C, S := planes.Critical, planes.Stable
-	mk := func(on ...int) []planes.PlaneState {
-		st := make([]planes.PlaneState, 36)
-		for i := range st {
-			st[i] = S
-		}
-		for _, k := range on {
-			st[k] = C
-		}
-		return st
-	}
-	for _, c := range []struct {
-		on   []int
-		want string
-	}{
-		{nil, ""},
-		{[]int{3, 4, 5}, "30-50"},
-		{[]int{35, 0, 1}, "350-10"}, // through the crown
-		{[]int{9, 27}, "90-90;270-270"},
-	} {
-		if got := arcs(mk(c.on...), C); got != c.want {
-			t.Errorf("%v: %q, want %q", c.on, got, c.want)
-		}
-	}
-	all := make([]planes.PlaneState, 36)
-	for i := range all {
-		all[i] = C
-	}
-	if got := arcs(all, C); got != "0-350" {
-		t.Errorf("all: %q", got)
-	}
-}
 
 func TestTunnelCommand(t *testing.T) {
 	dir := t.TempDir()
@@ -60,7 +26,7 @@ func TestTunnelCommand(t *testing.T) {
 		}
 	}
 	st := readCSV(t, filepath.Join(out, "stations.csv"))
-	if strings.Join(st[0], ",") != strings.Join(stationColumns, ",") || len(st) != 1+57*4 {
+	if strings.Join(st[0], ",") != strings.Join(table.StationColumns, ",") || len(st) != 1+57*4 {
 		t.Errorf("stations.csv: header %v, %d rows", st[0], len(st)-1)
 	}
 	wall := readCSV(t, filepath.Join(out, "wall.csv"))
@@ -88,7 +54,7 @@ func TestTunnelInput(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	sts, err := s.Tunnel.Stations("s.yaml")
+	sts, err := s.Tunnel.Stations()
 	if err != nil {
 		t.Fatal(err)
 	}

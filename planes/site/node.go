@@ -28,7 +28,11 @@ func (d node) errf(format string, a ...any) *Error {
 	if line == 0 && d.n != nil {
 		line = d.n.Line
 	}
-	return &Error{File: d.file, Line: line, Key: d.path, Msg: fmt.Sprintf(format, a...)}
+	col := 0
+	if d.n != nil && (d.line == 0 || d.line == d.n.Line) {
+		col = d.n.Column
+	}
+	return &Error{File: d.file, Line: line, Column: col, Key: d.path, Err: ErrInvalid, Msg: fmt.Sprintf(format, a...)}
 }
 
 func (d node) child(key *yaml.Node, n *yaml.Node) node {
@@ -56,7 +60,7 @@ type fields struct {
 // mapping checks that d is a mapping with keys only from allowed.
 func (d node) mapping(allowed ...string) (*fields, error) {
 	if d.n == nil || d.n.Kind != yaml.MappingNode {
-		return nil, d.errf("want a mapping of keys (%s), got %s", strings.Join(allowed, ", "), kindName(d.n))
+		return nil, d.errf("want a mapping of keys (%s), got %s", strings.Join(allowed, ", "), kindName(d.n)).is(ErrType)
 	}
 	f := &fields{parent: d, vals: map[string]node{}, keys: map[string]*yaml.Node{}}
 	for i := 0; i+1 < len(d.n.Content); i += 2 {
@@ -75,10 +79,10 @@ func (d node) mapping(allowed ...string) (*fields, error) {
 			if s := suggest(name, allowed); s != "" {
 				msg = fmt.Sprintf("unknown key %q (did you mean %q?); allowed here: %s", name, s, strings.Join(allowed, ", "))
 			}
-			return nil, kd.errf("%s", msg)
+			return nil, kd.errf("%s", msg).is(ErrUnknownKey)
 		}
 		if prev, dup := f.keys[name]; dup {
-			return nil, kd.errf("this key is given twice (first at line %d)", prev.Line)
+			return nil, kd.errf("this key is given twice (first at line %d)", prev.Line).is(ErrDuplicate)
 		}
 		f.vals[name] = kd
 		f.keys[name] = k
@@ -159,17 +163,17 @@ func (f *fields) present(candidates ...string) []string {
 }
 
 func (f *fields) missing(key, why string) *Error {
-	return f.parent.errf("missing required key %q%s", key, why)
+	return f.parent.errf("missing required key %q%s", key, why).is(ErrMissing)
 }
 
 // number reads a finite number.
 func (d node) number() (float64, error) {
 	if d.n == nil || d.n.Kind != yaml.ScalarNode || d.n.Tag == "!!null" {
-		return 0, d.errf("want a number, got %s", kindName(d.n))
+		return 0, d.errf("want a number, got %s", kindName(d.n)).is(ErrNotNumber)
 	}
 	v, err := strconv.ParseFloat(strings.TrimSpace(d.n.Value), 64)
 	if err != nil || math.IsNaN(v) || math.IsInf(v, 0) {
-		return 0, d.errf("want a finite number, got %q", d.n.Value)
+		return 0, d.errf("want a finite number, got %q", d.n.Value).is(ErrNotNumber)
 	}
 	return v, nil
 }
@@ -221,21 +225,21 @@ func (d node) numberIn(iv interval) (float64, error) {
 		return 0, err
 	}
 	if !iv.contains(v) {
-		return 0, d.errf("%s is outside the allowed range %s", d.n.Value, iv)
+		return 0, d.errf("%s is outside the allowed range %s", d.n.Value, iv).is(ErrRange)
 	}
 	return v, nil
 }
 
 func (d node) text() (string, error) {
 	if d.n == nil || d.n.Kind != yaml.ScalarNode || d.n.Tag == "!!null" {
-		return "", d.errf("want text, got %s", kindName(d.n))
+		return "", d.errf("want text, got %s", kindName(d.n)).is(ErrType)
 	}
 	return d.n.Value, nil
 }
 
 func (d node) boolean() (bool, error) {
 	if d.n == nil || d.n.Kind != yaml.ScalarNode || d.n.Tag != "!!bool" {
-		return false, d.errf("want true or false, got %s", kindName(d.n))
+		return false, d.errf("want true or false, got %s", kindName(d.n)).is(ErrType)
 	}
 	return d.n.Value == "true" || d.n.Value == "True" || d.n.Value == "TRUE", nil
 }
@@ -250,12 +254,12 @@ func (d node) oneOf(choices ...string) (string, error) {
 			return s, nil
 		}
 	}
-	return "", d.errf("%q is not one of: %s", s, strings.Join(choices, ", "))
+	return "", d.errf("%q is not one of: %s", s, strings.Join(choices, ", ")).is(ErrRange)
 }
 
 func (d node) list() ([]node, error) {
 	if d.n == nil || d.n.Kind != yaml.SequenceNode {
-		return nil, d.errf("want a list, got %s", kindName(d.n))
+		return nil, d.errf("want a list, got %s", kindName(d.n)).is(ErrType)
 	}
 	out := make([]node, len(d.n.Content))
 	for i, c := range d.n.Content {

@@ -57,11 +57,11 @@ func (s *Site) planeDefaults() planeDefaults {
 
 // parsePlane builds a plane from the raw text of its columns; present says
 // which columns the input has. errAt reports a problem with one column.
-func parsePlane(vals *[nCols]string, present *[nCols]bool, d planeDefaults, errAt func(col int, format string, a ...any) error) (Plane, error) {
+func parsePlane(vals *[nCols]string, present *[nCols]bool, d planeDefaults, errAt func(col int, kind error, format string, a ...any) error) (Plane, error) {
 	var p Plane
 	p.Name = strings.TrimSpace(vals[colName])
 	if p.Name == "" && !d.readings {
-		return p, errAt(colName, "empty name: every plane needs one")
+		return p, errAt(colName, ErrMissing, "empty name: every plane needs one")
 	}
 	num := func(col int) (float64, bool, error) {
 		if !present[col] {
@@ -73,7 +73,7 @@ func parsePlane(vals *[nCols]string, present *[nCols]bool, d planeDefaults, errA
 		}
 		v, err := strconv.ParseFloat(t, 64)
 		if err != nil || math.IsNaN(v) || math.IsInf(v, 0) {
-			return 0, false, errAt(col, "%q is not a number", t)
+			return 0, false, errAt(col, ErrNotNumber, "%q is not a number", t)
 		}
 		return v, true, nil
 	}
@@ -82,10 +82,10 @@ func parsePlane(vals *[nCols]string, present *[nCols]bool, d planeDefaults, errA
 		return p, err
 	}
 	if !ok {
-		return p, errAt(colDip, "empty: every plane needs a dip in [0, 90]°")
+		return p, errAt(colDip, ErrMissing, "empty: every plane needs a dip in [0, 90]°")
 	}
 	if dip < 0 || dip > 90 {
-		return p, errAt(colDip, "%s is outside [0, 90]° (dip is measured down from the horizontal)", fmtNum(dip))
+		return p, errAt(colDip, ErrRange, "%s is outside [0, 90]° (dip is measured down from the horizontal)", fmtNum(dip))
 	}
 	if present[colStrike] {
 		st, ok, err := num(colStrike)
@@ -93,10 +93,10 @@ func parsePlane(vals *[nCols]string, present *[nCols]bool, d planeDefaults, errA
 			return p, err
 		}
 		if !ok {
-			return p, errAt(colStrike, "empty: every plane needs a strike in [0, 360]°")
+			return p, errAt(colStrike, ErrMissing, "empty: every plane needs a strike in [0, 360]°")
 		}
 		if p.Orientation, err = planes.FromStrike(st, dip); err != nil {
-			return p, errAt(colStrike, "%s is outside [0, 360]°", fmtNum(st))
+			return p, errAt(colStrike, ErrRange, "%s is outside [0, 360]°", fmtNum(st))
 		}
 	} else {
 		dd, ok, err := num(colDipDirection)
@@ -104,10 +104,10 @@ func parsePlane(vals *[nCols]string, present *[nCols]bool, d planeDefaults, errA
 			return p, err
 		}
 		if !ok {
-			return p, errAt(colDipDirection, "empty: every plane needs a dip direction in [0, 360]°")
+			return p, errAt(colDipDirection, ErrMissing, "empty: every plane needs a dip direction in [0, 360]°")
 		}
 		if p.Orientation, err = planes.New(dip, dd); err != nil {
-			return p, errAt(colDipDirection, "%s is outside [0, 360]°", fmtNum(dd))
+			return p, errAt(colDipDirection, ErrRange, "%s is outside [0, 360]°", fmtNum(dd))
 		}
 	}
 	z, ok, err := num(colDepth)
@@ -116,7 +116,7 @@ func parsePlane(vals *[nCols]string, present *[nCols]bool, d planeDefaults, errA
 	}
 	switch {
 	case ok && z < 0:
-		return p, errAt(colDepth, "%s is negative: depth is metres below ground, ≥ 0", fmtNum(z))
+		return p, errAt(colDepth, ErrRange, "%s is negative: depth is metres below ground, ≥ 0", fmtNum(z))
 	case ok:
 		p.Depth = z
 	case d.hasDepth:
@@ -124,29 +124,29 @@ func parsePlane(vals *[nCols]string, present *[nCols]bool, d planeDefaults, errA
 	case d.readings:
 		p.Depth = math.NaN()
 	default:
-		return p, errAt(colDepth, "no depth for this plane and no depth: in the site file")
+		return p, errAt(colDepth, ErrMissing, "no depth for this plane and no depth: in the site file")
 	}
 	if p.Weight, ok, err = num(colWeight); err != nil {
 		return p, err
 	} else if ok && !(p.Weight > 0) {
-		return p, errAt(colWeight, "%s: a weight must be > 0", fmtNum(p.Weight))
+		return p, errAt(colWeight, ErrRange, "%s: a weight must be > 0", fmtNum(p.Weight))
 	}
 	if p.Friction, ok, err = num(colFriction); err != nil {
 		return p, err
 	} else if ok && !(p.Friction > 0) {
-		return p, errAt(colFriction, "%s: friction must be > 0", fmtNum(p.Friction))
+		return p, errAt(colFriction, ErrRange, "%s: friction must be > 0", fmtNum(p.Friction))
 	}
 	if p.Cohesion, ok, err = num(colCohesion); err != nil {
 		return p, err
 	} else if ok && p.Cohesion < 0 {
-		return p, errAt(colCohesion, "%s MPa: cohesion must be ≥ 0", fmtNum(p.Cohesion))
+		return p, errAt(colCohesion, ErrRange, "%s MPa: cohesion must be ≥ 0", fmtNum(p.Cohesion))
 	} else if ok && !d.coulomb && math.IsNaN(p.Friction) {
-		return p, errAt(colCohesion, "a cohesion alone cannot override the Barton–Bandis criterion: give friction too")
+		return p, errAt(colCohesion, ErrConflict, "a cohesion alone cannot override the Barton–Bandis criterion: give friction too")
 	}
 	if p.PorePressure, ok, err = num(colPorePressure); err != nil {
 		return p, err
 	} else if ok && p.PorePressure < 0 {
-		return p, errAt(colPorePressure, "%s MPa: pore pressure must be ≥ 0", fmtNum(p.PorePressure))
+		return p, errAt(colPorePressure, ErrRange, "%s MPa: pore pressure must be ≥ 0", fmtNum(p.PorePressure))
 	}
 	return p, nil
 }
@@ -154,11 +154,15 @@ func parsePlane(vals *[nCols]string, present *[nCols]bool, d planeDefaults, errA
 // CriterionFor returns the strength criterion of plane p: the site's, or a
 // Coulomb criterion built in scratch from the plane's friction and cohesion
 // columns (a missing one taken from the site's Coulomb criterion, or 0
-// cohesion). It does not allocate.
+// cohesion). It does not allocate; a nil scratch gets a new criterion of
+// the plane's own, for a caller that keeps it.
 func (s *Site) CriterionFor(p *Plane, scratch *planes.Coulomb) planes.Criterion {
 	hasMu, hasC := !math.IsNaN(p.Friction), !math.IsNaN(p.Cohesion)
 	if !hasMu && !hasC {
 		return s.Criterion
+	}
+	if scratch == nil {
+		scratch = new(planes.Coulomb)
 	}
 	*scratch = planes.Coulomb{}
 	if base, ok := s.Criterion.(*planes.Coulomb); ok {
@@ -205,13 +209,13 @@ func (s *Site) readInlinePlanes(v node) error {
 			}
 		}
 		if present[colStrike] == present[colDipDirection] {
-			return it.errf("give dip_direction or strike (right-hand rule), one of the two")
+			return it.errf("give dip_direction or strike (right-hand rule), one of the two").is(ErrConflict)
 		}
-		p, err := parsePlane(&vals, &present, d, func(col int, format string, a ...any) error {
+		p, err := parsePlane(&vals, &present, d, func(col int, kind error, format string, a ...any) error {
 			if v, ok := m.get(colNames[col]); ok {
-				return v.errf(format, a...)
+				return v.errf(format, a...).is(kind)
 			}
-			return it.errf(format, a...)
+			return it.errf(format, a...).is(kind)
 		})
 		if err != nil {
 			if _, ok := err.(*Error); ok {

@@ -12,20 +12,8 @@ import (
 
 	"cleft/insitu/geom"
 	"cleft/planes"
+	"cleft/planes/sets"
 )
-
-// SetsConfig is how field readings are turned into sets: the site file's
-// sets: block, or the flags of cleft sets.
-type SetsConfig struct {
-	Count     int                  // number of sets; 0 with no Seeds: automatic
-	Seeds     []planes.Orientation // starting set means
-	MaxAngle  float64              // cut-off cone, degrees; 0 for none
-	Line      *geom.Line           // sampling line for Terzaghi weights, or nil
-	MaxWeight float64              // cap of the Terzaghi weight
-}
-
-// DefaultSets is automatic choice, no cut-off, no sampling line.
-var DefaultSets = SetsConfig{MaxWeight: planes.DefaultMaxWeight}
 
 // ParseLine reads "TREND/PLUNGE", e.g. "120/10".
 func ParseLine(s string) (geom.Line, error) {
@@ -46,7 +34,7 @@ func (s *Site) readSets(v node) error {
 	if err != nil {
 		return err
 	}
-	c := DefaultSets
+	c := sets.DefaultConfig
 	if cv, ok := m.get("count"); ok {
 		n, err := cv.numberIn(interval{lo: 1, hi: 12})
 		if err != nil {
@@ -91,7 +79,7 @@ func (s *Site) readSets(v node) error {
 		}
 		c.Line = &l
 	}
-	if c.MaxWeight, _, err = m.optNumber("max_weight", interval{lo: 1, hi: 1000}, planes.DefaultMaxWeight); err != nil {
+	if c.MaxWeight, _, err = m.optNumber("max_weight", interval{lo: 1, hi: 1000}, sets.DefaultMaxWeight); err != nil {
 		return err
 	}
 	s.Sets = c
@@ -120,7 +108,7 @@ func ReadReadings(r io.Reader, name string, depth float64, hasDepth bool) ([]Pla
 		out = append(out, p)
 	}
 	if len(out) == 0 {
-		return nil, nil, "", &Error{File: name, Msg: "no readings: the table has a header but no rows"}
+		return nil, nil, "", &Error{File: name, Err: ErrEmpty, Msg: "no readings: the table has a header but no rows"}
 	}
 	return out, rd.ExtraNames, h.sum(), nil
 }
@@ -129,7 +117,7 @@ func ReadReadings(r io.Reader, name string, depth float64, hasDepth bool) ([]Pla
 func (s *Site) OpenReadings() ([]Plane, []string, string, error) {
 	f, err := s.open(s.ReadingsFile)
 	if err != nil {
-		return nil, nil, "", fmt.Errorf("%s: readings_file %s: cannot open it: %w", s.File, s.ReadingsFile, unwrapPath(err))
+		return nil, nil, "", &Error{File: s.File, Err: ErrRead, Msg: fmt.Sprintf("readings_file %s: cannot open it: %v", s.ReadingsFile, unwrapPath(err))}
 	}
 	defer f.Close()
 	return ReadReadings(f, s.ReadingsFile, s.Depth, s.HasDepth)
@@ -142,7 +130,7 @@ func LoadReadings(path string, stdin io.Reader) ([]Plane, []string, string, erro
 	}
 	f, err := os.Open(path)
 	if err != nil {
-		return nil, nil, "", fmt.Errorf("%s: cannot open the readings table: %w", path, unwrapPath(err))
+		return nil, nil, "", &Error{File: path, Err: ErrRead, Msg: fmt.Sprintf("cannot open the readings table: %v", unwrapPath(err))}
 	}
 	defer f.Close()
 	return ReadReadings(f, path, 0, false)

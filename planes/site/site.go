@@ -14,6 +14,9 @@ import (
 
 	"cleft/insitu"
 	"cleft/planes"
+	"cleft/planes/sets"
+	"cleft/planes/slope"
+	"cleft/planes/tunnel"
 
 	"go.yaml.in/yaml/v3"
 )
@@ -42,11 +45,15 @@ type Site struct {
 	// sets) resolved likewise, or "".
 	ReadingsFile string
 	// Sets is how the readings are grouped (the sets: block, or defaults).
-	Sets SetsConfig
-	// Slope is the cut slope to screen, or nil.
-	Slope *Slope
-	// Tunnel is the alignment to screen, or nil.
-	Tunnel *Tunnel
+	Sets sets.Config
+	// Slope is the cut slope to screen, or nil; SlopeDefaults lists the
+	// keys of its block the file left out, as "key = value (why)".
+	Slope         *slope.Slope
+	SlopeDefaults []string
+	// Tunnel is the alignment to screen, or nil; TunnelDefaults as
+	// SlopeDefaults.
+	Tunnel         *tunnel.Tunnel
+	TunnelDefaults []string
 
 	// ReportDepths are the depths of report.depths, or nil.
 	ReportDepths []float64
@@ -84,7 +91,7 @@ func (s *Site) Summary() string { return strings.Join(s.summary, ", ") }
 func Load(path string) (*Site, error) {
 	data, err := os.ReadFile(path)
 	if err != nil {
-		return nil, fmt.Errorf("%s: cannot read the site file: %w", path, unwrapPath(err))
+		return nil, &Error{File: path, Err: ErrRead, Msg: fmt.Sprintf("cannot read the site file: %v", unwrapPath(err))}
 	}
 	return Parse(data, path)
 }
@@ -106,13 +113,13 @@ func parse(data []byte, name string, fsys fs.FS) (*Site, error) {
 	var doc yaml.Node
 	if err := dec.Decode(&doc); err != nil {
 		if errors.Is(err, io.EOF) {
-			return nil, &Error{File: name, Msg: "the site file is empty: it needs at least site: and stress:"}
+			return nil, &Error{File: name, Err: ErrEmpty, Msg: "the site file is empty: it needs at least site: and stress:"}
 		}
 		return nil, yamlError(name, err)
 	}
 	var extra yaml.Node
 	if err := dec.Decode(&extra); err == nil {
-		return nil, &Error{File: name, Line: extra.Line, Msg: "a second YAML document (---) follows: a site file holds one"}
+		return nil, &Error{File: name, Line: extra.Line, Err: ErrSyntax, Msg: "a second YAML document (---) follows: a site file holds one"}
 	}
 	root := node{file: name, n: resolveAlias(&doc)}
 	if root.n.Kind == yaml.DocumentNode && len(root.n.Content) == 1 {
@@ -159,7 +166,7 @@ func yamlError(name string, err error) error {
 			break
 		}
 	}
-	return &Error{File: name, Line: line, Msg: "not valid YAML: " + msg}
+	return &Error{File: name, Line: line, Err: ErrSyntax, Msg: "not valid YAML: " + msg}
 }
 
 // parserProblems are the YAML library's parser (not scanner) messages.
@@ -187,7 +194,7 @@ func (s *Site) read(root node) error {
 		return err
 	}
 	if strings.TrimSpace(s.Name) == "" {
-		return v.errf("the site name is empty")
+		return v.errf("the site name is empty").is(ErrEmpty)
 	}
 	if s.Depth, s.HasDepth, err = f.optNumber("depth", unit(nonNegative, "m"), 0); err != nil {
 		return err
@@ -219,24 +226,24 @@ func (s *Site) read(root node) error {
 			return err
 		}
 		if strings.TrimSpace(p) == "" {
-			return pv.errf("empty path")
+			return pv.errf("empty path").is(ErrEmpty)
 		}
 		s.PlanesFile = resolvePath(s.File, p)
 	}
-	s.Sets = DefaultSets
+	s.Sets = sets.DefaultConfig
 	if rv, ok := f.get("readings_file"); ok {
 		p, err := rv.text()
 		if err != nil {
 			return err
 		}
 		if strings.TrimSpace(p) == "" {
-			return rv.errf("empty path")
+			return rv.errf("empty path").is(ErrEmpty)
 		}
 		s.ReadingsFile = resolvePath(s.File, p)
 	}
 	if sv, ok := f.get("sets"); ok {
 		if s.ReadingsFile == "" {
-			return sv.errf("sets: goes with readings_file: (the field readings to group)")
+			return sv.errf("sets: goes with readings_file: (the field readings to group)").is(ErrConflict)
 		}
 		if err := s.readSets(sv); err != nil {
 			return err
@@ -293,7 +300,7 @@ func (s *Site) readWater(f *fields) error {
 	}
 	if w.Dry {
 		if k := m.present("gradient", "table"); len(k) > 0 {
-			return v.errf("dry: true goes without %s", strings.Join(k, " and "))
+			return v.errf("dry: true goes without %s", strings.Join(k, " and ")).is(ErrConflict)
 		}
 		s.Params = append(s.Params, Param{Group: "water", Name: "dry", Value: "true", Source: src})
 	} else {
@@ -358,7 +365,7 @@ func (s *Site) readStrength(f *fields) error {
 	}
 	if model == "coulomb" {
 		if k := m.present("jrc", "jcs", "residual_angle"); len(k) > 0 {
-			return m.vals[k[0]].errf("goes with model: barton-bandis, not with the Coulomb criterion")
+			return m.vals[k[0]].errf("goes with model: barton-bandis, not with the Coulomb criterion").is(ErrConflict)
 		}
 		mu, given, err := m.optNumber("friction", positive, 0.6)
 		if err != nil {
@@ -379,7 +386,7 @@ func (s *Site) readStrength(f *fields) error {
 		return nil
 	}
 	if k := m.present("friction", "cohesion"); len(k) > 0 {
-		return m.vals[k[0]].errf("goes with the Coulomb criterion, not with model: barton-bandis")
+		return m.vals[k[0]].errf("goes with the Coulomb criterion, not with model: barton-bandis").is(ErrConflict)
 	}
 	var vals [3]float64
 	for i, k := range []struct {
@@ -423,7 +430,7 @@ func (s *Site) readReport(v node) error {
 		return err
 	}
 	if len(items) == 0 {
-		return dv.errf("the list is empty: give at least one depth, or leave report: out")
+		return dv.errf("the list is empty: give at least one depth, or leave report: out").is(ErrEmpty)
 	}
 	for _, it := range items {
 		z, err := it.numberIn(unit(nonNegative, "m"))

@@ -6,32 +6,16 @@ import (
 
 	"cleft/insitu"
 	"cleft/planes"
+	"cleft/planes/slope"
 )
-
-// Slope is the site file's slope: block, with its defaults applied.
-type Slope struct {
-	Face          planes.Orientation
-	Top           planes.Orientation // dip 0 for a flat top
-	Height        float64            // m
-	FrictionAngle float64            // ° for the kinematic tests and the planar FS
-	LateralLimit  float64            // ° planar sliding
-	ToppleLimit   float64            // ° flexural toppling
-	UnitWeight    float64            // MN/m³
-	CrackFill     []float64          // water cases, fractions of the crack depth
-	Crack         float64            // m, depth or distance behind the crest
-	CrackByDepth  bool
-	CrackGiven    bool // false: Hoek & Bray's critical depth
-	Cohesion      float64
-	// Defaults lists the keys the file left out, as "key = value (why)".
-	Defaults []string
-}
 
 func (s *Site) readSlope(v node) error {
 	m, err := v.mapping("face", "top", "height", "friction_angle", "lateral_limit", "toppling_limit", "unit_weight", "water", "tension_crack", "source")
 	if err != nil {
 		return err
 	}
-	sl := &Slope{}
+	sl := &slope.Slope{}
+	var defaults []string
 	orient := func(key string) (planes.Orientation, bool, error) {
 		ov, ok := m.get(key)
 		if !ok {
@@ -70,7 +54,7 @@ func (s *Site) readSlope(v node) error {
 		return err
 	} else if !ok {
 		sl.Top = planes.MustNew(0, sl.Face.DipDirection())
-		sl.Defaults = append(sl.Defaults, "top = horizontal")
+		defaults = append(defaults, "top = horizontal")
 	}
 	hv, ok := m.get("height")
 	if !ok {
@@ -84,17 +68,17 @@ func (s *Site) readSlope(v node) error {
 	if sl.FrictionAngle, given, err = m.optNumber("friction_angle", interval{lo: 0, hi: 90, openLo: true, openHi: true, unit: "°"}, phiDefault); err != nil {
 		return err
 	} else if !given {
-		sl.Defaults = append(sl.Defaults, fmt.Sprintf("friction_angle = %.1f° (atan of the site friction %.4g)", phiDefault, s.Criterion.Friction()))
+		defaults = append(defaults, fmt.Sprintf("friction_angle = %.1f° (atan of the site friction %.4g)", phiDefault, s.Criterion.Friction()))
 	}
 	if sl.LateralLimit, given, err = m.optNumber("lateral_limit", interval{lo: 0, hi: 90, openLo: true, unit: "°"}, 20); err != nil {
 		return err
 	} else if !given {
-		sl.Defaults = append(sl.Defaults, "lateral_limit = 20°")
+		defaults = append(defaults, "lateral_limit = 20°")
 	}
 	if sl.ToppleLimit, given, err = m.optNumber("toppling_limit", interval{lo: 0, hi: 90, openLo: true, unit: "°"}, sl.LateralLimit); err != nil {
 		return err
 	} else if !given {
-		sl.Defaults = append(sl.Defaults, fmt.Sprintf("toppling_limit = %g° (the lateral limit)", sl.LateralLimit))
+		defaults = append(defaults, fmt.Sprintf("toppling_limit = %g° (the lateral limit)", sl.LateralLimit))
 	}
 	gm, isGradient := s.Model.(*insitu.GradientModel)
 	uv, ok := m.get("unit_weight")
@@ -105,7 +89,7 @@ func (s *Site) readSlope(v node) error {
 		}
 	case isGradient:
 		sl.UnitWeight = gm.VerticalGradient // MPa/m is MN/m³
-		sl.Defaults = append(sl.Defaults, fmt.Sprintf("unit_weight = %.5g MN/m³ (the vertical stress gradient)", sl.UnitWeight))
+		defaults = append(defaults, fmt.Sprintf("unit_weight = %.5g MN/m³ (the vertical stress gradient)", sl.UnitWeight))
 	default:
 		return m.missing("unit_weight", " (MN/m³): a measured stress model gives no rock density")
 	}
@@ -121,7 +105,7 @@ func (s *Site) readSlope(v node) error {
 				return err
 			}
 			if len(items) == 0 {
-				return fv.errf("give at least one fraction in [0, 1]")
+				return fv.errf("give at least one fraction in [0, 1]").is(ErrEmpty)
 			}
 			sl.CrackFill = nil
 			for _, it := range items {
@@ -133,7 +117,7 @@ func (s *Site) readSlope(v node) error {
 			}
 		}
 	} else {
-		sl.Defaults = append(sl.Defaults, "water.tension_crack_fill = [0, 0.5, 1]")
+		defaults = append(defaults, "water.tension_crack_fill = [0, 0.5, 1]")
 	}
 	if cv, ok := m.get("tension_crack"); ok {
 		cm, err := cv.mapping("distance", "depth")
@@ -144,7 +128,7 @@ func (s *Site) readSlope(v node) error {
 		case 0:
 			return cv.errf("give distance (m behind the crest) or depth (m below the upper surface)")
 		case 2:
-			return cm.vals["depth"].errf("give distance or depth, not both")
+			return cm.vals["depth"].errf("give distance or depth, not both").is(ErrConflict)
 		}
 		sl.CrackGiven = true
 		if dv, ok := cm.get("depth"); ok {
@@ -156,11 +140,12 @@ func (s *Site) readSlope(v node) error {
 			return err
 		}
 	} else {
-		sl.Defaults = append(sl.Defaults, "tension_crack = Hoek & Bray's critical depth for each plane")
+		defaults = append(defaults, "tension_crack = Hoek & Bray's critical depth for each plane")
 	}
 	if c, ok := s.Criterion.(*planes.Coulomb); ok {
 		sl.Cohesion = c.Cohesion
 	}
 	s.Slope = sl
+	s.SlopeDefaults = defaults
 	return nil
 }

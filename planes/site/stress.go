@@ -36,7 +36,7 @@ func (s *Site) readStress(v node) error {
 		return s.readMeasured(m, src)
 	}
 	if k := m.present("reference_depth", "scaling"); len(k) > 0 {
-		return m.vals[k[0]].errf("goes with principal: or tensor:, not with the gradient model")
+		return m.vals[k[0]].errf("goes with principal: or tensor:, not with the gradient model").is(ErrConflict)
 	}
 	return s.readGradient(m, src)
 }
@@ -63,7 +63,7 @@ func (s *Site) readGradient(m *fields, src string) error {
 	case 0:
 		return vm.missing("gradient", " (MPa/m), or give density (kg/m³)")
 	case 2:
-		return vm.vals["density"].errf("give gradient or density, not both")
+		return vm.vals["density"].errf("give gradient or density, not both").is(ErrConflict)
 	}
 	if g, ok := vm.get("gradient"); ok {
 		if gv, err = g.numberIn(unit(positive, "MPa/m")); err != nil {
@@ -151,7 +151,7 @@ func (s *Site) readHorizontal(v node, name, src string, isMax bool) (insitu.Hori
 		return insitu.Horizontal{}, 0, v.errf("give one of ratio (S/Sv), effective_ratio ((S−Pp)/(Sv−Pp)), gradient (MPa/m, with optional offset MPa) or sheorey ({modulus: GPa})")
 	case 1:
 	default:
-		return insitu.Horizontal{}, 0, m.vals[laws[1]].errf("give one of %s, not several", strings.Join(laws, ", "))
+		return insitu.Horizontal{}, 0, m.vals[laws[1]].errf("give one of %s, not several", strings.Join(laws, ", ")).is(ErrConflict)
 	}
 	var h insitu.Horizontal
 	law := laws[0]
@@ -187,7 +187,7 @@ func (s *Site) readHorizontal(v node, name, src string, isMax bool) (insitu.Hori
 	}
 	if ov, ok := m.get("offset"); ok {
 		if h.Kind != insitu.Gradient {
-			return h, 0, ov.errf("offset goes with gradient only, not with %s", law)
+			return h, 0, ov.errf("offset goes with gradient only, not with %s", law).is(ErrConflict)
 		}
 		if h.Offset, err = ov.numberIn(unit(nonNegative, "MPa")); err != nil {
 			return h, 0, err

@@ -40,7 +40,7 @@ func NewPlaneReader(r io.Reader, file string, d planeDefaults) (*PlaneReader, er
 	pr := &PlaneReader{file: file, r: cr, defaults: d}
 	head, err := cr.Read()
 	if errors.Is(err, io.EOF) {
-		return nil, &Error{File: file, Msg: "empty: want a header row naming the columns (name, dip, dip_direction, depth, …)"}
+		return nil, &Error{File: file, Err: ErrEmpty, Msg: "empty: want a header row naming the columns (name, dip, dip_direction, depth, …)"}
 	}
 	if err != nil {
 		return nil, pr.csvError(err)
@@ -54,10 +54,10 @@ func NewPlaneReader(r io.Reader, file string, d planeDefaults) (*PlaneReader, er
 	for i, h := range head {
 		h = strings.ToLower(strings.TrimSpace(strings.TrimPrefix(h, "\ufeff")))
 		if h == "" {
-			return nil, &Error{File: file, Line: line, Msg: fmt.Sprintf("column %d has an empty name in the header", i+1)}
+			return nil, &Error{File: file, Line: line, Err: ErrMissing, Msg: fmt.Sprintf("column %d has an empty name in the header", i+1)}
 		}
 		if seen[h] {
-			return nil, &Error{File: file, Line: line, Key: h, Msg: "this column appears twice in the header"}
+			return nil, &Error{File: file, Line: line, Key: h, Err: ErrDuplicate, Msg: "this column appears twice in the header"}
 		}
 		seen[h] = true
 		known := false
@@ -79,7 +79,7 @@ func NewPlaneReader(r io.Reader, file string, d planeDefaults) (*PlaneReader, er
 		pr.present[c] = pr.idx[c] >= 0
 	}
 	need := func(c int, why string) error {
-		return &Error{File: file, Line: line, Msg: fmt.Sprintf("the header has no %q column%s; it has: %s", colNames[c], why, strings.Join(head, ", "))}
+		return &Error{File: file, Line: line, Err: ErrMissing, Msg: fmt.Sprintf("the header has no %q column%s; it has: %s", colNames[c], why, strings.Join(head, ", "))}
 	}
 	switch {
 	case !pr.present[colName] && !d.readings:
@@ -87,7 +87,7 @@ func NewPlaneReader(r io.Reader, file string, d planeDefaults) (*PlaneReader, er
 	case !pr.present[colDip]:
 		return nil, need(colDip, "")
 	case pr.present[colStrike] && pr.present[colDipDirection]:
-		return nil, &Error{File: file, Line: line, Msg: "the header has both strike and dip_direction: give one of the two"}
+		return nil, &Error{File: file, Line: line, Err: ErrConflict, Msg: "the header has both strike and dip_direction: give one of the two"}
 	case !pr.present[colStrike] && !pr.present[colDipDirection]:
 		return nil, need(colDipDirection, " (or strike, right-hand rule)")
 	case !pr.present[colDepth] && !d.hasDepth && !d.readings:
@@ -99,9 +99,9 @@ func NewPlaneReader(r io.Reader, file string, d planeDefaults) (*PlaneReader, er
 func (pr *PlaneReader) csvError(err error) error {
 	var pe *csv.ParseError
 	if errors.As(err, &pe) {
-		return &Error{File: pr.file, Line: pe.Line, Msg: "not valid CSV: " + pe.Err.Error()}
+		return &Error{File: pr.file, Line: pe.Line, Err: ErrSyntax, Msg: "not valid CSV: " + pe.Err.Error()}
 	}
-	return &Error{File: pr.file, Msg: err.Error()}
+	return &Error{File: pr.file, Err: ErrRead, Msg: err.Error()}
 }
 
 // Next reads the next plane into p. It returns io.EOF after the last row.
@@ -116,7 +116,7 @@ func (pr *PlaneReader) Next(p *Plane) error {
 	}
 	line, _ := pr.r.FieldPos(0)
 	if len(rec) != pr.width {
-		return &Error{File: pr.file, Line: line, Msg: fmt.Sprintf("this row has %d values and the header %d columns: every row needs one value per column (quote values that contain commas)", len(rec), pr.width)}
+		return &Error{File: pr.file, Line: line, Err: ErrSyntax, Msg: fmt.Sprintf("this row has %d values and the header %d columns: every row needs one value per column (quote values that contain commas)", len(rec), pr.width)}
 	}
 	for c, i := range pr.idx {
 		if i >= 0 {
@@ -124,8 +124,8 @@ func (pr *PlaneReader) Next(p *Plane) error {
 		}
 	}
 	extras := p.Extras[:0]
-	q, err := parsePlane(&pr.vals, &pr.present, pr.defaults, func(col int, format string, a ...any) error {
-		return &Error{File: pr.file, Line: line, Key: fmt.Sprintf("%s (column %d)", colNames[col], pr.idx[col]+1), Msg: fmt.Sprintf(format, a...)}
+	q, err := parsePlane(&pr.vals, &pr.present, pr.defaults, func(col int, kind error, format string, a ...any) error {
+		return &Error{File: pr.file, Line: line, Column: pr.idx[col] + 1, Key: fmt.Sprintf("%s (column %d)", colNames[col], pr.idx[col]+1), Err: kind, Msg: fmt.Sprintf(format, a...)}
 	})
 	if err != nil {
 		return err
@@ -169,7 +169,7 @@ func (s *Site) OpenPlanes(table string, stdin io.Reader) (*PlaneStream, error) {
 	case table != "":
 		f, err := os.Open(table)
 		if err != nil {
-			return nil, fmt.Errorf("%s: cannot open the planes table: %w", table, unwrapPath(err))
+			return nil, &Error{File: table, Err: ErrRead, Msg: fmt.Sprintf("cannot open the planes table: %v", unwrapPath(err))}
 		}
 		r, ps.closer = f, f
 	default:
@@ -177,7 +177,7 @@ func (s *Site) OpenPlanes(table string, stdin io.Reader) (*PlaneStream, error) {
 		if s.PlanesFile != "" {
 			f, err := s.open(s.PlanesFile)
 			if err != nil {
-				return nil, fmt.Errorf("%s: planes_file %s: cannot open it: %w", s.File, s.PlanesFile, unwrapPath(err))
+				return nil, &Error{File: s.File, Err: ErrRead, Msg: fmt.Sprintf("planes_file %s: cannot open it: %v", s.PlanesFile, unwrapPath(err))}
 			}
 			r, ps.closer, name = f, f, s.PlanesFile
 		}
@@ -186,7 +186,7 @@ func (s *Site) OpenPlanes(table string, stdin io.Reader) (*PlaneStream, error) {
 			if s.ReadingsFile != "" {
 				msg = "no planes: the site has only readings_file:, which cleft assess groups into sets and resolves; give planes: or planes_file:, or --planes FILE.csv"
 			}
-			return nil, &Error{File: s.File, Msg: msg}
+			return nil, &Error{File: s.File, Err: ErrNoPlanes, Msg: msg}
 		}
 	}
 	if r != nil {

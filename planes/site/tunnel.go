@@ -1,49 +1,23 @@
 package site
 
 import (
+	"cleft/planes/tunnel"
 	"encoding/csv"
 	"errors"
 	"fmt"
 	"io"
 	"math"
-	"sort"
 	"strconv"
 	"strings"
 )
-
-// Leg is a straight leg of a tunnel alignment, chainages in m.
-type Leg struct {
-	From, To      float64
-	Trend, Plunge float64 // of the drive, °; plunge negative for a rising drive
-}
-
-// Tunnel is the site file's tunnel: block.
-type Tunnel struct {
-	Legs     []Leg
-	Cover    [][2]float64 // (chainage, cover above the crown), m, increasing chainage
-	Spacing  float64      // m between stations
-	Radius   float64      // m
-	UCS      float64      // MPa
-	Poisson  float64
-	Sets     []string // planes and sets to screen; nil for all
-	Drained  bool     // wall pore pressure 0 (else the far field's)
-	Defaults []string
-}
-
-// Station is a point of the alignment where the tunnel is screened.
-type Station struct {
-	Chainage      float64
-	Trend, Plunge float64 // of the drive
-	Cover         float64 // m of rock above the crown
-	Depth         float64 // of the tunnel axis: cover + radius
-}
 
 func (s *Site) readTunnel(v node) error {
 	m, err := v.mapping("alignment", "cover", "cover_file", "spacing", "radius", "rock", "sets", "wall_pore_pressure", "source")
 	if err != nil {
 		return err
 	}
-	t := &Tunnel{}
+	t := &tunnel.Tunnel{}
+	var defaults []string
 	av, ok := m.get("alignment")
 	if !ok {
 		return m.missing("alignment", " (legs {from, to, trend, plunge} in chainage order)")
@@ -53,14 +27,14 @@ func (s *Site) readTunnel(v node) error {
 		return err
 	}
 	if len(legs) == 0 {
-		return av.errf("give at least one leg")
+		return av.errf("give at least one leg").is(ErrEmpty)
 	}
 	for i, lv := range legs {
 		lm, err := lv.mapping("from", "to", "trend", "plunge")
 		if err != nil {
 			return err
 		}
-		var l Leg
+		var l tunnel.Leg
 		for _, k := range []struct {
 			key string
 			dst *float64
@@ -100,7 +74,7 @@ func (s *Site) readTunnel(v node) error {
 	case 0:
 		return m.missing("cover", " (pairs [chainage, cover] in m) or cover_file:")
 	case 2:
-		return m.vals["cover_file"].errf("give cover or cover_file, not both")
+		return m.vals["cover_file"].errf("give cover or cover_file, not both").is(ErrConflict)
 	}
 	if cv, ok := m.get("cover"); ok {
 		items, err := cv.list()
@@ -146,12 +120,12 @@ func (s *Site) readTunnel(v node) error {
 	if t.Spacing, given, err = m.optNumber("spacing", unit(positive, "m"), 50); err != nil {
 		return err
 	} else if !given {
-		t.Defaults = append(t.Defaults, "spacing = 50 m")
+		defaults = append(defaults, "spacing = 50 m")
 	}
 	if t.Radius, given, err = m.optNumber("radius", unit(positive, "m"), 1); err != nil {
 		return err
 	} else if !given {
-		t.Defaults = append(t.Defaults, "radius = 1 m")
+		defaults = append(defaults, "radius = 1 m")
 	}
 	rv, ok := m.get("rock")
 	if !ok {
@@ -171,7 +145,7 @@ func (s *Site) readTunnel(v node) error {
 	if t.Poisson, given, err = rm.optNumber("poisson", interval{lo: 0, hi: 0.5, openHi: true}, 0.25); err != nil {
 		return err
 	} else if !given {
-		t.Defaults = append(t.Defaults, "rock.poisson = 0.25")
+		defaults = append(defaults, "rock.poisson = 0.25")
 	}
 	if sv, ok := m.get("sets"); ok {
 		items, err := sv.list()
@@ -194,9 +168,13 @@ func (s *Site) readTunnel(v node) error {
 		}
 		t.Drained = w == "drained"
 	} else {
-		t.Defaults = append(t.Defaults, "wall_pore_pressure = drained (Pp = 0 at the wall)")
+		defaults = append(defaults, "wall_pore_pressure = drained (Pp = 0 at the wall)")
+	}
+	if _, err := t.Stations(); err != nil {
+		return &Error{File: s.File, Key: "tunnel.cover", Err: ErrRange, Msg: err.Error()}
 	}
 	s.Tunnel = t
+	s.TunnelDefaults = defaults
 	return nil
 }
 
@@ -219,10 +197,10 @@ func readCover(r io.Reader, name string) ([][2]float64, error) {
 	cr.TrimLeadingSpace = true
 	head, err := cr.Read()
 	if errors.Is(err, io.EOF) {
-		return nil, &Error{File: name, Msg: "empty: want a header row with chainage and cover"}
+		return nil, &Error{File: name, Err: ErrEmpty, Msg: "empty: want a header row with chainage and cover"}
 	}
 	if err != nil {
-		return nil, &Error{File: name, Msg: "not valid CSV: " + err.Error()}
+		return nil, &Error{File: name, Err: ErrSyntax, Msg: "not valid CSV: " + err.Error()}
 	}
 	ic, iv := -1, -1
 	for i, h := range head {
@@ -234,7 +212,7 @@ func readCover(r io.Reader, name string) ([][2]float64, error) {
 		}
 	}
 	if ic < 0 || iv < 0 {
-		return nil, &Error{File: name, Line: 1, Msg: "the header needs the columns chainage and cover (m)"}
+		return nil, &Error{File: name, Line: 1, Err: ErrMissing, Msg: "the header needs the columns chainage and cover (m)"}
 	}
 	var out [][2]float64
 	for {
@@ -244,66 +222,20 @@ func readCover(r io.Reader, name string) ([][2]float64, error) {
 		}
 		line, _ := cr.FieldPos(0)
 		if err != nil {
-			return nil, &Error{File: name, Line: line, Msg: "not valid CSV: " + err.Error()}
+			return nil, &Error{File: name, Line: line, Err: ErrSyntax, Msg: "not valid CSV: " + err.Error()}
 		}
 		var p [2]float64
 		for j, i := range []int{ic, iv} {
 			v, err := strconv.ParseFloat(strings.TrimSpace(rec[i]), 64)
 			if err != nil || math.IsNaN(v) || math.IsInf(v, 0) || v < 0 {
-				return nil, &Error{File: name, Line: line, Key: head[i], Msg: fmt.Sprintf("%q: want a number ≥ 0 (m)", rec[i])}
+				return nil, &Error{File: name, Line: line, Key: head[i], Err: ErrRange, Msg: fmt.Sprintf("%q: want a number ≥ 0 (m)", rec[i])}
 			}
 			p[j] = v
 		}
 		out = append(out, p)
 	}
 	if err := checkProfile(out); err != nil {
-		return nil, &Error{File: name, Msg: err.Error()}
-	}
-	return out, nil
-}
-
-// CoverAt interpolates the cover profile linearly at chainage ch; false
-// outside the profile.
-func (t *Tunnel) CoverAt(ch float64) (float64, bool) {
-	c := t.Cover
-	if ch < c[0][0] || ch > c[len(c)-1][0] {
-		return 0, false
-	}
-	i := sort.Search(len(c), func(i int) bool { return c[i][0] >= ch })
-	if c[i][0] == ch {
-		return c[i][1], true
-	}
-	a, b := c[i-1], c[i]
-	return a[1] + (b[1]-a[1])*(ch-a[0])/(b[0]-a[0]), true
-}
-
-// Stations returns the stations every Spacing from the start of the first
-// leg, and the end of the last; a station on a leg boundary takes the drive
-// of the leg it starts. A station outside the cover profile is an error
-// naming its chainage.
-func (t *Tunnel) Stations(file string) ([]Station, error) {
-	start, end := t.Legs[0].From, t.Legs[len(t.Legs)-1].To
-	var chs []float64
-	for k := 0; ; k++ {
-		ch := start + float64(k)*t.Spacing
-		if ch >= end-1e-9 {
-			break
-		}
-		chs = append(chs, ch)
-	}
-	chs = append(chs, end)
-	var out []Station
-	leg := 0
-	for _, ch := range chs {
-		for leg < len(t.Legs)-1 && ch >= t.Legs[leg].To {
-			leg++
-		}
-		cover, ok := t.CoverAt(ch)
-		if !ok {
-			return nil, &Error{File: file, Key: "tunnel.cover", Msg: fmt.Sprintf("station at chainage %g m lies outside the cover profile (%g to %g m)", ch, t.Cover[0][0], t.Cover[len(t.Cover)-1][0])}
-		}
-		l := t.Legs[leg]
-		out = append(out, Station{Chainage: ch, Trend: l.Trend, Plunge: l.Plunge, Cover: cover, Depth: cover + t.Radius})
+		return nil, &Error{File: name, Err: ErrRange, Msg: err.Error()}
 	}
 	return out, nil
 }

@@ -1,7 +1,8 @@
-package planes
+package sets
 
 import (
 	"cleft/insitu/geom"
+	"cleft/planes"
 	"math"
 	"math/rand/v2"
 	"testing"
@@ -9,6 +10,9 @@ import (
 	"gonum.org/v1/gonum/floats/scalar"
 	"gonum.org/v1/gonum/spatial/r3"
 )
+
+// tol is the tolerance of exact identities between floating-point results.
+const tol = 1e-12
 
 func poles(lines ...geom.Line) []r3.Vec {
 	out := make([]r3.Vec, len(lines))
@@ -105,7 +109,7 @@ func TestSetStraddlingThePrimitive(t *testing.T) {
 		if i%2 == 0 {
 			dd += 180
 		}
-		ps = append(ps, MustNew(85+rng.Float64()*5, dd).Normal())
+		ps = append(ps, planes.MustNew(85+rng.Float64()*5, dd).Normal())
 	}
 	c := Cluster(ps, ClusterOptions{K: 1})
 	f := Fisher(ps, nil)
@@ -134,7 +138,7 @@ func TestOrientationTensorPatterns(t *testing.T) {
 	var girdle []r3.Vec
 	for i := range 180 { // poles round the great circle of the plane 30/100
 		s, c := math.Sincos(math.Pi * float64(i) / 180)
-		o := MustNew(30, 100)
+		o := planes.MustNew(30, 100)
 		girdle = append(girdle, r3.Add(r3.Scale(c, o.StrikeVec()), r3.Scale(s, o.DownDip())))
 	}
 	g := OrientationTensor(girdle, nil)
@@ -144,7 +148,7 @@ func TestOrientationTensorPatterns(t *testing.T) {
 	if k := g.WoodcockK(); !(k < 1) {
 		t.Errorf("girdle K = %v, want < 1", k)
 	}
-	if a := geom.AxialAngle(g.Axes[2], MustNew(30, 100).Normal()); a > 1e-6 {
+	if a := geom.AxialAngle(g.Axes[2], planes.MustNew(30, 100).Normal()); a > 1e-6 {
 		t.Errorf("girdle S3 axis %v° from the girdle's pole", a)
 	}
 	var uni []r3.Vec
@@ -166,7 +170,7 @@ func TestTerzaghiWeight(t *testing.T) {
 	// Terzaghi (1965): w = 1/|cos δ|, δ between the sampling line and the pole.
 	line := r3.Vec{Z: 1} // a vertical borehole
 	for _, dip := range []float64{0, 30, 60, 80, 84, 85, 89, 90} {
-		o := MustNew(dip, 40)
+		o := planes.MustNew(dip, 40)
 		want := 1 / math.Abs(math.Cos(dip*math.Pi/180))
 		if want > DefaultMaxWeight {
 			want = DefaultMaxWeight
@@ -176,13 +180,13 @@ func TestTerzaghiWeight(t *testing.T) {
 		}
 	}
 	// The cap applies from sin θ = 1/max: θ = 5.74° for max = 10.
-	if w := TerzaghiWeight(MustNew(84.3, 0).Normal(), line, 10); w != 10 {
+	if w := TerzaghiWeight(planes.MustNew(84.3, 0).Normal(), line, 10); w != 10 {
 		t.Errorf("plane 5.7° from the line: w = %v, want the cap 10", w)
 	}
 }
 
 func threeSets(rng *rand.Rand) ([]r3.Vec, []int, []r3.Vec) {
-	means := []r3.Vec{MustNew(75, 140).Normal(), MustNew(20, 250).Normal(), MustNew(85, 10).Normal()}
+	means := []r3.Vec{planes.MustNew(75, 140).Normal(), planes.MustNew(20, 250).Normal(), planes.MustNew(85, 10).Normal()}
 	var ps []r3.Vec
 	var truth []int
 	for k, m := range means {
@@ -215,7 +219,7 @@ func TestClusterThreeSets(t *testing.T) {
 		t.Errorf("%d of %d readings in the wrong set", wrong, len(ps))
 	}
 	// Seeds give the same sets.
-	s := Cluster(ps, ClusterOptions{Seeds: []r3.Vec{MustNew(70, 135).Normal(), MustNew(25, 245).Normal(), MustNew(80, 15).Normal()}})
+	s := Cluster(ps, ClusterOptions{Seeds: []r3.Vec{planes.MustNew(70, 135).Normal(), planes.MustNew(25, 245).Normal(), planes.MustNew(80, 15).Normal()}})
 	for k := range means {
 		if geom.AxialAngle(s.Axes[k], c.Axes[k]) > 0.5 {
 			t.Errorf("seeded set %d differs from the k-means set", k+1)
@@ -236,7 +240,7 @@ func TestClusterCutOff(t *testing.T) {
 	for len(ps) < n+15 {
 		v := r3.Unit(r3.Vec{X: rng.NormFloat64(), Y: rng.NormFloat64(), Z: rng.NormFloat64()})
 		far := true
-		for _, m := range []r3.Vec{MustNew(75, 140).Normal(), MustNew(20, 250).Normal(), MustNew(85, 10).Normal()} {
+		for _, m := range []r3.Vec{planes.MustNew(75, 140).Normal(), planes.MustNew(20, 250).Normal(), planes.MustNew(85, 10).Normal()} {
 			if geom.AxialAngle(v, m) < 40 {
 				far = false
 			}
@@ -287,7 +291,7 @@ func TestKamb(t *testing.T) {
 func TestAnalyseSets(t *testing.T) {
 	rng := rand.New(rand.NewPCG(53, 54))
 	ps, _, means := threeSets(rng)
-	a := AnalyseSets(ps, nil, SetOptions{})
+	a := Analyse(ps, nil, Options{})
 	if !a.Auto || len(a.Sets) != 3 || len(a.Scores) != 7 {
 		t.Fatalf("auto: %d sets, scores %v", len(a.Sets), a.Scores)
 	}

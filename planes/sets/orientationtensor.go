@@ -1,4 +1,4 @@
-package planes
+package sets
 
 import (
 	"cleft/insitu/geom"

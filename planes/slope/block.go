@@ -1,12 +1,11 @@
-package planes
+package slope
 
 import (
 	"fmt"
 	"math"
-)
 
-// WaterUnitWeight is γw of fresh water, MN/m³ (common practice).
-const WaterUnitWeight = 0.00981
+	"cleft/insitu"
+)
 
 // PlanarBlock is the cross-section of a planar sliding block with a vertical
 // tension crack in the upper slope surface (Hoek & Bray 1981; Wyllie & Mah
@@ -32,8 +31,6 @@ type PlanarBlock struct {
 func CriticalCrackDepth(h, faceDip, planeDip float64) float64 {
 	return h * (1 - math.Sqrt(math.Tan(planeDip*math.Pi/180)/math.Tan(faceDip*math.Pi/180)))
 }
-
-func tand(a float64) float64 { return math.Tan(a * math.Pi / 180) }
 
 // NewPlanarBlock works out the block for a crack given by its depth z (when
 // byDepth) or its distance b behind the crest. The block is the polygon toe
@@ -90,8 +87,8 @@ func NewPlanarBlock(h, faceDip, topDip, planeDip, crack float64, byDepth bool, g
 // the weight) is taken as 0: the block floats and only cohesion holds it.
 func (b PlanarBlock) FS(c, phi, zw float64) float64 {
 	sp, cp := math.Sincos(b.PlaneDip * math.Pi / 180)
-	U := 0.5 * WaterUnitWeight * zw * b.Length
-	V := 0.5 * WaterUnitWeight * zw * zw
+	U := 0.5 * insitu.Hydrostatic * zw * b.Length
+	V := 0.5 * insitu.Hydrostatic * zw * zw
 	n := math.Max(0, b.Weight*cp-U-V*sp)
 	return (c*b.Length + n*tand(phi)) / (b.Weight*sp + V*cp)
 }

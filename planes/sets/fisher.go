@@ -1,7 +1,8 @@
-package planes
+package sets
 
 import (
 	"cleft/insitu/geom"
+	"cleft/planes"
 	"math"
 
 	"gonum.org/v1/gonum/spatial/r3"
@@ -24,7 +25,7 @@ type FisherStats struct {
 func (f FisherStats) MeanPole() geom.Line { return geom.LineOf(f.Mean) }
 
 // MeanPlane returns the plane whose pole is the mean axis.
-func (f FisherStats) MeanPlane() Orientation { return FromNormal(f.Mean) }
+func (f FisherStats) MeanPlane() planes.Orientation { return planes.FromNormal(f.Mean) }
 
 // Fisher returns the statistics of the axes in normals (Fisher 1953; Fisher,
 // Lewis & Embleton 1987, §5):

@@ -1,14 +1,15 @@
-package planes
+package sets
 
 import (
 	"cleft/insitu/geom"
+	"cleft/planes"
 	"math"
 
 	"gonum.org/v1/gonum/spatial/r3"
 )
 
-// SetOptions say how AnalyseSets finds the sets.
-type SetOptions struct {
+// Options say how Analyse finds the sets.
+type Options struct {
 	K        int      // number of sets; 0 with no Seeds chooses automatically
 	Seeds    []r3.Vec // starting set axes (poles); fixes the number of sets
 	MaxAngle float64  // cut-off cone, degrees; 0 for none
@@ -25,10 +26,10 @@ type Set struct {
 }
 
 // Mean returns the set's mean plane (from the raw Fisher mean).
-func (s Set) Mean() Orientation { return s.Raw.MeanPlane() }
+func (s Set) Mean() planes.Orientation { return s.Raw.MeanPlane() }
 
-// SetAnalysis is readings grouped into sets with statistics per set.
-type SetAnalysis struct {
+// Analysis is readings grouped into sets with statistics per set.
+type Analysis struct {
 	Sets   []Set
 	Assign []int // set of each reading, or −1
 	// AngleToMean is each reading's angle (degrees, axial) to its set's mean
@@ -42,11 +43,11 @@ type SetAnalysis struct {
 	Scores []float64
 }
 
-// AnalyseSets groups the poles into sets (Cluster, with ChooseK when
+// Analyse groups the poles into sets (Cluster, with ChooseK when
 // neither K nor seeds are given) and computes each set's Fisher statistics,
 // raw and weighted, and its orientation tensor. weights may be nil.
-func AnalyseSets(poles []r3.Vec, weights []float64, o SetOptions) SetAnalysis {
-	var a SetAnalysis
+func Analyse(poles []r3.Vec, weights []float64, o Options) Analysis {
+	var a Analysis
 	co := ClusterOptions{K: o.K, Seeds: o.Seeds, MaxAngle: o.MaxAngle, Weights: weights}
 	if o.K == 0 && len(o.Seeds) == 0 {
 		kmax := o.KMax

@@ -1,0 +1,106 @@
+package assess
+
+import (
+	"fmt"
+	"math"
+	"strings"
+
+	"cleft/insitu/geom"
+	"cleft/planes/site"
+	"cleft/planes/slope"
+	"cleft/planes/tunnel"
+)
+
+// Candidates are the planes a slope is screened against: the site's planes
+// (not the readings), each with its own friction and cohesion where it gives
+// them, and the mean plane of every joint set ("S1 mean", …) with the
+// slope's.
+func (a *Assessment) Candidates() []slope.Candidate {
+	sl := a.Site.Slope
+	var out []slope.Candidate
+	for i := 0; i < a.NPlanes; i++ {
+		p := &a.Planes[i]
+		c := slope.Candidate{Name: p.Name, Orientation: p.Orientation, Phi: sl.FrictionAngle, Cohesion: sl.Cohesion}
+		if !math.IsNaN(p.Friction) {
+			c.Phi = math.Atan(p.Friction) * geom.Deg
+		}
+		if !math.IsNaN(p.Cohesion) {
+			c.Cohesion = p.Cohesion
+		}
+		out = append(out, c)
+	}
+	for _, s := range a.Sets {
+		out = append(out, slope.Candidate{Name: s.Name + " mean", Orientation: s.Plane.Orientation, Phi: sl.FrictionAngle, Cohesion: sl.Cohesion, IsSet: true})
+	}
+	return out
+}
+
+// Slope screens the site's slope against the candidates. It panics when the
+// site has no slope.
+func (a *Assessment) Slope() *slope.Screening {
+	if a.Site.Slope == nil {
+		panic("assess: Slope of a site without a slope")
+	}
+	return slope.Screen(*a.Site.Slope, a.Candidates())
+}
+
+// Targets are the planes and sets the tunnel is screened against: those
+// named by tunnel.sets, or every site plane (not the readings) and every
+// set mean ("S1", …). A name that matches nothing is an error naming the
+// names there are.
+func (a *Assessment) Targets() ([]tunnel.Target, error) {
+	s := a.Site
+	var all []tunnel.Target
+	add := func(name string, p *site.Plane) {
+		t := tunnel.Target{Name: name, Orientation: p.Orientation, Criterion: s.CriterionFor(p, nil), PoreExcess: math.NaN()}
+		if !math.IsNaN(p.PorePressure) {
+			t.PoreExcess = p.PorePressure - s.Model.At(p.Depth).PorePressure
+		}
+		all = append(all, t)
+	}
+	for i := 0; i < a.NPlanes; i++ {
+		add(a.Planes[i].Name, &a.Planes[i])
+	}
+	for i := range a.Sets {
+		add(a.Sets[i].Name, &a.Sets[i].Plane)
+	}
+	want := s.Tunnel.Sets
+	if want == nil {
+		return all, nil
+	}
+	var out []tunnel.Target
+	for _, w := range want {
+		found := false
+		for _, t := range all {
+			if t.Name == w {
+				out = append(out, t)
+				found = true
+			}
+		}
+		if !found {
+			var names []string
+			for _, t := range all {
+				names = append(names, t.Name)
+			}
+			return nil, &site.Error{File: s.File, Key: "tunnel.sets", Err: site.ErrMissing, Msg: fmt.Sprintf("no plane or set is named %q; there are: %s", w, strings.Join(names, ", "))}
+		}
+	}
+	return out, nil
+}
+
+// Tunnel screens the site's tunnel against the targets. It panics when the
+// site has no tunnel.
+func (a *Assessment) Tunnel() (*tunnel.Screening, error) {
+	if a.Site.Tunnel == nil {
+		panic("assess: Tunnel of a site without a tunnel")
+	}
+	ts, err := a.Targets()
+	if err != nil {
+		return nil, err
+	}
+	sc, err := tunnel.Screen(*a.Site.Tunnel, a.Site.Model, ts)
+	if err != nil {
+		return nil, &site.Error{File: a.Site.File, Key: "tunnel", Err: site.ErrRange, Msg: err.Error()}
+	}
+	return sc, nil
+}

@@ -1,0 +1,147 @@
+package slope
+
+import (
+	"cleft/insitu/geom"
+	"cleft/planes"
+)
+
+// Condition is a condition of a kinematic test that is not met, as a bit of
+// Kinematic.Fails.
+type Condition int
+
+const (
+	// Lateral: the dip direction is beyond the lateral limit.
+	Lateral Condition = 1 << iota
+	// Daylight: the plane or line does not daylight in the face (or, for a
+	// wedge, its line plunges into the slope: Kinematic.Offset ≥ 90).
+	Daylight
+	// Friction: it dips or plunges less than the friction angle.
+	Friction
+	// Toppling: (90° − dip) + φ exceeds the face dip.
+	Toppling
+	// Parallel: the two planes of a wedge are parallel; there is no line.
+	Parallel
+)
+
+// Mode is how a kinematically feasible case fails.
+type Mode int
+
+const (
+	NoMode        Mode = iota // not feasible
+	PlanarSlide               // planar sliding on the plane
+	WedgeBoth                 // a wedge sliding on both planes along the line
+	WedgeOnFirst              // a wedge sliding on its first plane alone
+	WedgeOnSecond             // a wedge sliding on its second plane alone
+	Flexural                  // flexural toppling
+)
+
+// Kinematic is the outcome of one kinematic test: feasible with its Mode, or
+// the conditions that fail; and the figures behind the verdict, so that a
+// caller can say why.
+type Kinematic struct {
+	Feasible bool
+	Fails    Condition // the conditions not met, 0 when feasible
+	Mode     Mode
+
+	Phi          float64 // friction angle used, °
+	Limit        float64 // lateral limit used, ° (planar sliding, toppling)
+	Offset       float64 // ° of the dip direction (or line trend) from the face's dip direction; toppling: from its opposite
+	Dip          float64 // dip of the plane, or plunge of the line, °
+	Trend        float64 // dip direction of the plane, or trend of the line, °
+	FaceApparent float64 // apparent dip of the face along Trend, °
+	ToppleSum    float64 // flexural toppling: (90° − dip) + φ, °
+	FaceDip      float64 // true dip of the face, °
+}
+
+// Conventions at the boundaries (this tool's choice, the cautious one where
+// a choice exists): a plane or line exactly at the friction angle, and a dip
+// direction exactly at the lateral limit, pass (limiting equilibrium counts
+// as able to fail); a plane or line dipping exactly as steeply as the face's
+// apparent dip does not daylight (it runs parallel to the face).
+
+// PlanarSliding tests plane p for planar sliding on face f (Markland test as
+// refined by Hoek & Bray 1981): the plane daylights (dips less than the
+// face's apparent dip in the plane's dip direction), dips at least as
+// steeply as the friction angle phi (degrees), and its dip direction lies
+// within lateral degrees of the face's.
+func PlanarSliding(p, f planes.Orientation, phi, lateral float64) Kinematic {
+	k := Kinematic{Phi: phi, Limit: lateral, Dip: p.Dip(), Trend: p.DipDirection(), FaceDip: f.Dip()}
+	k.Offset = azDiff(p.DipDirection(), f.DipDirection())
+	k.FaceApparent = ApparentDip(f, p.DipDirection())
+	if k.Offset > lateral {
+		k.Fails |= Lateral
+	}
+	if !(p.Dip() < k.FaceApparent) {
+		k.Fails |= Daylight
+	}
+	if p.Dip() < phi {
+		k.Fails |= Friction
+	}
+	if k.Feasible = k.Fails == 0; k.Feasible {
+		k.Mode = PlanarSlide
+	}
+	return k
+}
+
+// WedgeSliding tests the wedge of planes a and b on face f (Hoek & Bray
+// 1981): the line of intersection points out of the face (its trend within
+// 90° of the face's dip direction), daylights (plunges less than the face's
+// apparent dip along its trend) and plunges at least as steeply as phi. A
+// feasible wedge slides on one plane alone when that plane's dip direction
+// lies between the line's trend and the face's dip direction (Hoek & Bray
+// 1981; Wyllie & Mah 2004), else on both. It returns the line (towards the
+// face when horizontal) and false in place of it for parallel planes.
+func WedgeSliding(a, b, f planes.Orientation, phi float64) (geom.Line, bool, Kinematic) {
+	k := Kinematic{Phi: phi, FaceDip: f.Dip()}
+	l, ok := Intersection(a, b)
+	if !ok {
+		k.Fails = Parallel
+		return l, false, k
+	}
+	// Of the two senses of a horizontal line, take the one towards the face.
+	if l.Plunge == 0 && azDiff(l.Trend, f.DipDirection()) > 90 {
+		l.Trend = geom.Azimuth(l.Trend + 180)
+	}
+	k.Dip, k.Trend = l.Plunge, l.Trend
+	k.Offset = azDiff(l.Trend, f.DipDirection())
+	k.FaceApparent = ApparentDip(f, l.Trend)
+	if k.Offset >= 90 || !(l.Plunge < k.FaceApparent) {
+		k.Fails |= Daylight
+	}
+	if l.Plunge < phi {
+		k.Fails |= Friction
+	}
+	if k.Feasible = k.Fails == 0; k.Feasible {
+		k.Mode = WedgeBoth
+		if between(a.DipDirection(), l.Trend, f.DipDirection()) {
+			k.Mode = WedgeOnFirst
+		}
+		if between(b.DipDirection(), l.Trend, f.DipDirection()) {
+			k.Mode = WedgeOnSecond
+		}
+	}
+	return l, true, k
+}
+
+// FlexuralToppling tests plane p for flexural toppling on face f (Goodman &
+// Bray 1976): the plane dips into the face, its dip direction within
+// lateral degrees of the opposite of the face's, and
+//
+//	(90° − δ) + φ ≤ ψf
+//
+// so that slip between the layers can take place.
+func FlexuralToppling(p, f planes.Orientation, phi, lateral float64) Kinematic {
+	k := Kinematic{Phi: phi, Limit: lateral, Dip: p.Dip(), Trend: p.DipDirection(), FaceDip: f.Dip()}
+	k.Offset = azDiff(p.DipDirection(), f.DipDirection()+180)
+	k.ToppleSum = 90 - p.Dip() + phi
+	if k.Offset > lateral {
+		k.Fails |= Lateral
+	}
+	if k.ToppleSum > f.Dip() {
+		k.Fails |= Toppling
+	}
+	if k.Feasible = k.Fails == 0; k.Feasible {
+		k.Mode = Flexural
+	}
+	return k
+}

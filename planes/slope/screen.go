@@ -1,0 +1,129 @@
+package slope
+
+import (
+	"math"
+
+	"cleft/insitu/geom"
+)
+
+// Test is one of the kinematic tests.
+type Test int
+
+const (
+	PlanarTest Test = iota
+	WedgeTest
+	TopplingTest
+)
+
+// String returns the test's name in the tables: planar, wedge or
+// flexural-toppling.
+func (t Test) String() string {
+	switch t {
+	case PlanarTest:
+		return "planar"
+	case WedgeTest:
+		return "wedge"
+	}
+	return "flexural-toppling"
+}
+
+// Case is one test of one candidate (or, for a wedge, of a pair).
+type Case struct {
+	Test Test
+	A, B int // indexes into the candidates; B is −1 but for wedges
+	Kinematic
+	Line    geom.Line // wedge: the line of intersection; others: the dip vector
+	HasLine bool      // false for a wedge of parallel planes
+
+	// Planar cases that are feasible: the factor of safety per water case
+	// (Slope.CrackFill), the crack depth (m), and the water depth in the
+	// crack at which FS falls to 1 (m; NaN when a full crack leaves it
+	// above 1; 0 when it is at or below 1 dry). BlockErr says why a
+	// feasible case has no factor of safety (its block is outside the
+	// limit-equilibrium model); then FS is nil.
+	FS          []float64
+	CrackDepth  float64
+	WaterToFail float64
+	BlockErr    error
+}
+
+// Screening is every test of a slope: planar sliding of each candidate, then
+// wedge sliding of each pair, then flexural toppling of each candidate.
+type Screening struct {
+	Slope      Slope
+	Candidates []Candidate
+	Cases      []Case
+}
+
+// Screen runs every test on every candidate and pair of candidates.
+func Screen(sl Slope, cands []Candidate) *Screening {
+	sc := &Screening{Slope: sl, Candidates: cands}
+	phi := sl.FrictionAngle
+	for i, c := range cands {
+		k := PlanarSliding(c.Orientation, sl.Face, phi, sl.LateralLimit)
+		r := Case{Test: PlanarTest, A: i, B: -1, Kinematic: k, Line: c.Orientation.DipLine(), HasLine: true, CrackDepth: math.NaN(), WaterToFail: math.NaN()}
+		if k.Feasible {
+			r.planarFS(sl, c)
+		}
+		sc.Cases = append(sc.Cases, r)
+	}
+	for i, a := range cands {
+		for j := i + 1; j < len(cands); j++ {
+			l, ok, k := WedgeSliding(a.Orientation, cands[j].Orientation, sl.Face, phi)
+			sc.Cases = append(sc.Cases, Case{Test: WedgeTest, A: i, B: j, Kinematic: k, Line: l, HasLine: ok, CrackDepth: math.NaN(), WaterToFail: math.NaN()})
+		}
+	}
+	for i, c := range cands {
+		k := FlexuralToppling(c.Orientation, sl.Face, phi, sl.ToppleLimit)
+		sc.Cases = append(sc.Cases, Case{Test: TopplingTest, A: i, B: -1, Kinematic: k, Line: c.Orientation.DipLine(), HasLine: true, CrackDepth: math.NaN(), WaterToFail: math.NaN()})
+	}
+	return sc
+}
+
+// planarFS works out the tension-crack block of a feasible planar case and
+// its factor of safety for each water case.
+func (r *Case) planarFS(sl Slope, c Candidate) {
+	dd := c.Orientation.DipDirection()
+	psiF := ApparentDip(sl.Face, dd)
+	crack, byDepth := sl.Crack, sl.CrackByDepth
+	if !sl.CrackGiven {
+		crack, byDepth = CriticalCrackDepth(sl.Height, psiF, c.Orientation.Dip()), true
+	}
+	b, err := NewPlanarBlock(sl.Height, psiF, math.Max(0, ApparentDip(sl.Top, dd)), c.Orientation.Dip(), crack, byDepth, sl.UnitWeight)
+	if err != nil {
+		r.BlockErr = err
+		return
+	}
+	r.CrackDepth = b.CrackDepth
+	for _, f := range sl.CrackFill {
+		r.FS = append(r.FS, b.FS(c.Cohesion, c.Phi, f*b.CrackDepth))
+	}
+	r.WaterToFail = b.WaterDepthToFail(c.Cohesion, c.Phi)
+}
+
+// Feasible returns the number of feasible cases of each test.
+func (sc *Screening) Feasible() (planar, wedge, toppling int) {
+	for _, c := range sc.Cases {
+		if !c.Feasible {
+			continue
+		}
+		switch c.Test {
+		case PlanarTest:
+			planar++
+		case WedgeTest:
+			wedge++
+		default:
+			toppling++
+		}
+	}
+	return planar, wedge, toppling
+}
+
+// Names returns the name of a case's plane, or of its two planes joined by
+// "+".
+func (sc *Screening) Names(c Case) string {
+	if c.B < 0 {
+		return sc.Candidates[c.A].Name
+	}
+	return sc.Candidates[c.A].Name + "+" + sc.Candidates[c.B].Name
+}

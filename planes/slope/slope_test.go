@@ -1,0 +1,182 @@
+package slope
+
+import (
+	"cleft/insitu"
+	"cleft/planes"
+	"math"
+	"testing"
+
+	"gonum.org/v1/gonum/floats/scalar"
+	"gonum.org/v1/gonum/spatial/r3"
+)
+
+func TestApparentDip(t *testing.T) {
+	// Common practice: tan α = tan δ · cos β.
+	o := planes.MustNew(60, 120)
+	for _, c := range []struct{ az, want float64 }{
+		{120, 60}, {30, 0}, {210, 0}, {300, -60},
+		{150, math.Atan(math.Tan(60*math.Pi/180)*math.Cos(30*math.Pi/180)) * 180 / math.Pi},
+	} {
+		if got := ApparentDip(o, c.az); !scalar.EqualWithinAbs(got, c.want, 1e-9) {
+			t.Errorf("apparent dip along %v = %v, want %v", c.az, got, c.want)
+		}
+	}
+	if got := ApparentDip(planes.MustNew(90, 10), 40); got != 90 {
+		t.Errorf("vertical plane: %v, want 90", got)
+	}
+}
+
+func TestIntersection(t *testing.T) {
+	// Wyllie & Mah (2004) example as quoted in lecture notes (read): planes
+	// 50/130 and 30/250 meet in a line 20.5° → 200.5°, read graphically off
+	// a net; the exact answer is 20.87° → 201.34° (derived), so the check
+	// against the published value allows 1°.
+	l, ok := Intersection(planes.MustNew(50, 130), planes.MustNew(30, 250))
+	if !ok || !scalar.EqualWithinAbs(l.Plunge, 20.5, 1) || !scalar.EqualWithinAbs(l.Trend, 200.5, 1) {
+		t.Errorf("line %v, want about 200.5/20.5", l)
+	}
+	if !scalar.EqualWithinAbs(l.Plunge, 20.87, 0.005) || !scalar.EqualWithinAbs(l.Trend, 201.34, 0.005) {
+		t.Errorf("line %v, want 201.34/20.87 (derived)", l)
+	}
+	// The line lies in both planes: n1·l = n2·l = 0, the cross product's axis.
+	v := l.Vec()
+	if d1, d2 := r3.Dot(v, planes.MustNew(50, 130).Normal()), r3.Dot(v, planes.MustNew(30, 250).Normal()); math.Abs(d1) > 1e-12 || math.Abs(d2) > 1e-12 {
+		t.Errorf("line not in the planes: %v, %v", d1, d2)
+	}
+	if _, ok := Intersection(planes.MustNew(40, 10), planes.MustNew(40, 10)); ok {
+		t.Error("parallel planes intersect")
+	}
+	// Hand case: two vertical planes meet in a vertical line.
+	if l, _ := Intersection(planes.MustNew(90, 0), planes.MustNew(90, 90)); !scalar.EqualWithinAbs(l.Plunge, 90, 1e-9) {
+		t.Errorf("two vertical planes: %v, want plunge 90", l)
+	}
+}
+
+var face = planes.MustNew(65, 210)
+
+func TestPlanarSliding(t *testing.T) {
+	// Hoek & Bray (1981), lecture notes (read): dip directions within ±20°,
+	// ψp < ψf (daylights), ψp > φ. One feasible case and one failing case per
+	// condition.
+	const phi, lat = 35, 20
+	for _, c := range []struct {
+		name  string
+		p     planes.Orientation
+		ok    bool
+		fails Condition
+	}{
+		{"feasible", planes.MustNew(45, 200), true, 0},
+		{"beyond the lateral limit", planes.MustNew(45, 240), false, Lateral},
+		{"steeper than the face", planes.MustNew(70, 210), false, Daylight},
+		{"flatter than φ", planes.MustNew(30, 210), false, Friction},
+		{"exactly at φ passes", planes.MustNew(35, 210), true, 0},
+		{"exactly at the lateral limit passes", planes.MustNew(45, 230), true, 0},
+		{"exactly the face dip does not daylight", planes.MustNew(65, 210), false, Daylight},
+	} {
+		k := PlanarSliding(c.p, face, phi, lat)
+		if k.Feasible != c.ok || k.Fails != c.fails || (k.Mode == PlanarSlide) != c.ok {
+			t.Errorf("%s: %+v", c.name, k)
+		}
+	}
+}
+
+func TestWedgeSliding(t *testing.T) {
+	const phi = 30
+	for _, c := range []struct {
+		name  string
+		a, b  planes.Orientation
+		mode  Mode
+		fails Condition
+	}{
+		// Line 20.9 → 201.3: daylights in a 65/210 face but plunges below φ = 30.
+		{"line flatter than φ", planes.MustNew(50, 130), planes.MustNew(30, 250), NoMode, Friction},
+		{"both planes", planes.MustNew(55, 170), planes.MustNew(55, 250), WedgeBoth, 0},
+		// Line 227/48: A dips to 218, between the face (210) and the line.
+		{"one plane", planes.MustNew(48, 218), planes.MustNew(75, 300), WedgeOnFirst, 0},
+		{"the other plane", planes.MustNew(75, 300), planes.MustNew(48, 218), WedgeOnSecond, 0},
+		{"into the slope", planes.MustNew(50, 20), planes.MustNew(50, 80), NoMode, Daylight},
+		{"steeper than the face", planes.MustNew(80, 170), planes.MustNew(80, 250), NoMode, Daylight},
+		{"parallel", planes.MustNew(50, 200), planes.MustNew(50, 200), NoMode, Parallel},
+	} {
+		l, _, k := WedgeSliding(c.a, c.b, face, phi)
+		if k.Mode != c.mode || k.Fails != c.fails || k.Feasible != (c.mode != NoMode) {
+			t.Errorf("%s: line %v, %+v", c.name, l, k)
+		}
+	}
+}
+
+func TestFlexuralToppling(t *testing.T) {
+	// Goodman & Bray (1976) (read, summary): (90° − δ) + φ ≤ ψf for planes
+	// dipping into the face within the lateral limit.
+	const phi, lat = 30, 20
+	for _, c := range []struct {
+		name string
+		p    planes.Orientation
+		ok   bool
+	}{
+		{"feasible", planes.MustNew(80, 30), true},
+		{"boundary (90−85)+30 = 35 ≤ 65 passes", planes.MustNew(85, 30), true},
+		{"exactly (90−55)+30 = 65 passes", planes.MustNew(55, 30), true},
+		{"too flat: (90−50)+30 = 70 > 65", planes.MustNew(50, 30), false},
+		{"dips out of the face", planes.MustNew(80, 210), false},
+		{"beyond the lateral limit", planes.MustNew(80, 60), false},
+	} {
+		if k := FlexuralToppling(c.p, face, phi, lat); k.Feasible != c.ok {
+			t.Errorf("%s: %+v", c.name, k)
+		}
+	}
+}
+
+func TestPlanarBlock(t *testing.T) {
+	const h, psiF, psiP, gamma = 30.0, 65.0, 35.0, 0.026
+	cot := func(a float64) float64 { return 1 / math.Tan(a*math.Pi/180) }
+	for _, z := range []float64{0.0001, 4, 8, 12} {
+		b, err := NewPlanarBlock(h, psiF, 0, psiP, z, true, gamma)
+		if err != nil {
+			t.Fatal(err)
+		}
+		// Hoek & Bray (1981); Wyllie & Mah (2004): flat top, crack in the
+		// upper surface, W = ½γH²{[1 − (z/H)²] cot ψp − cot ψf},
+		// A = (H − z)/sin ψp.
+		w := 0.5 * gamma * h * h * ((1-(z/h)*(z/h))*cot(psiP) - cot(psiF))
+		a := (h - z) / math.Sin(psiP*math.Pi/180)
+		if !scalar.EqualWithinAbsOrRel(b.Weight, w, 1e-12, 1e-12) || !scalar.EqualWithinAbsOrRel(b.Length, a, 1e-12, 1e-12) {
+			t.Errorf("z = %v: W %v A %v, want %v %v", z, b.Weight, b.Length, w, a)
+		}
+		if !scalar.EqualWithinAbs(b.CrackDepth, z, 1e-9) {
+			t.Errorf("z = %v: crack depth came out %v", z, b.CrackDepth)
+		}
+		// The factor of safety of the published formula, by hand.
+		c, phi, zw := 0.02, 32.0, 0.5*z
+		U, V := 0.5*insitu.Hydrostatic*zw*a, 0.5*insitu.Hydrostatic*zw*zw
+		sp, cp := math.Sincos(psiP * math.Pi / 180)
+		want := (c*a + (w*cp-U-V*sp)*math.Tan(phi*math.Pi/180)) / (w*sp + V*cp)
+		if got := b.FS(c, phi, zw); !scalar.EqualWithinAbsOrRel(got, want, 1e-12, 1e-12) {
+			t.Errorf("z = %v: FS %v, want %v", z, got, want)
+		}
+	}
+	// Dry and cohesionless: FS = tan φ / tan ψp whatever the geometry
+	// (lecture notes, read).
+	b, _ := NewPlanarBlock(h, psiF, 5, psiP, 6, false, gamma)
+	if got := b.FS(0, 38, 0); !scalar.EqualWithinAbs(got, math.Tan(38*math.Pi/180)/math.Tan(psiP*math.Pi/180), 1e-12) {
+		t.Errorf("dry cohesionless FS %v", got)
+	}
+	// By distance: a crack 6 m behind the crest of a flat top is as deep as
+	// the geometry says: z = H + b tan 0 − (H cot ψf + b) tan ψp.
+	bd, _ := NewPlanarBlock(h, psiF, 0, psiP, 6, false, gamma)
+	if want := h - (h*cot(psiF)+6)*math.Tan(psiP*math.Pi/180); !scalar.EqualWithinAbs(bd.CrackDepth, want, 1e-9) || !scalar.EqualWithinAbs(bd.Behind, 6, 1e-9) {
+		t.Errorf("crack by distance: z %v b %v, want %v 6", bd.CrackDepth, bd.Behind, want)
+	}
+	// The water depth to fail brings FS to 1.
+	bw, _ := NewPlanarBlock(h, psiF, 0, psiP, 10, true, gamma)
+	if zw := bw.WaterDepthToFail(0.01, 38); math.IsNaN(zw) || !scalar.EqualWithinAbs(bw.FS(0.01, 38, zw), 1, 1e-9) {
+		t.Errorf("water depth to fail %v gives FS %v", zw, bw.FS(0.01, 38, zw))
+	}
+	// Critical crack depth (Hoek & Bray 1981, memory): z/H = 1 − √(cot ψf tan ψp).
+	if zc := CriticalCrackDepth(h, psiF, psiP); !scalar.EqualWithinAbs(zc/h, 1-math.Sqrt(cot(psiF)*math.Tan(psiP*math.Pi/180)), 1e-12) {
+		t.Errorf("critical crack depth %v", zc)
+	}
+	if _, err := NewPlanarBlock(h, psiF, 0, psiP, 25, true, gamma); err == nil {
+		t.Error("a crack meeting the plane in front of the crest was accepted")
+	}
+}
