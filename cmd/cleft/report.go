@@ -86,7 +86,8 @@ func reportState(st insitu.State, mu float64) report.State {
 // order of their least stable plane) when the planes carry a set column.
 func (a *screened) planeTable() (*report.Table, bool) {
 	t := &report.Table{Columns: []string{"plane", "dip/dip dir.", "depth m", "σn'", "τ", "Ts", "Td", "FS", "ΔPp to slip", "rake °", "sense", "state"},
-		Numeric: []bool{false, true, true, true, true, true, true, true, true, true, false, false}}
+		Numeric: []bool{false, true, true, true, true, true, true, true, true, true, false, false},
+		NoWrap:  []bool{11: true}}
 	setCol := -1
 	for i, n := range a.Extras {
 		if n == "set" {
@@ -134,6 +135,7 @@ func (a *screened) setsTable() *report.Table {
 		Notes:   []string{words.Grouping(a.Grouping) + " Statistics after Fisher (1953) — mean plane, concentration K, 95 % cone α95 — and Woodcock (1977) K of the orientation tensor (above 1 a cluster, below 1 a girdle). The stress is resolved on each set's mean plane at the median depth of its readings."},
 		Columns: []string{"set", "readings", "weighted", "mean plane", "pole", "K", "α95 °", "Woodcock K", "depth m", "σn'", "τ", "Ts", "FS", "ΔPp to slip", "state"},
 		Numeric: []bool{false, true, true, true, true, true, true, true, true, true, true, true, true, true, false},
+		NoWrap:  []bool{14: true},
 	}
 	for _, st := range a.Sets {
 		r, f := st.Result, st.Set.Raw

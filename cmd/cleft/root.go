@@ -7,8 +7,8 @@ import (
 	"os"
 	"strings"
 
-	"cleft/planes/site/demo"
 	"cleft/planes/site"
+	"cleft/planes/site/demo"
 
 	"github.com/spf13/cobra"
 )

@@ -65,6 +65,7 @@ type Table struct {
 	Notes   []string
 	Columns []string
 	Numeric []bool // right-aligned columns
+	NoWrap  []bool // columns kept on one line (verdicts)
 	Rows    []Row
 	Groups  []Group
 	Empty   string // shown when there are no rows
@@ -94,7 +95,15 @@ var page string
 
 var tmpl = template.Must(template.New("report").Funcs(template.FuncMap{
 	"inc":     func(i int) int { return i + 1 },
-	"numeric": func(t *Table, i int) bool { return i < len(t.Numeric) && t.Numeric[i] },
+	"cls": func(t *Table, i int) template.HTMLAttr {
+		switch {
+		case i < len(t.Numeric) && t.Numeric[i]:
+			return ` class="n"`
+		case i < len(t.NoWrap) && t.NoWrap[i]:
+			return ` class="state"`
+		}
+		return ""
+	},
 }).Parse(page))
 
 // inline strips the XML prolog of an SVG document so that it can stand
