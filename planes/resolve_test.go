@@ -124,14 +124,39 @@ func TestResolveProperties(t *testing.T) {
 			t.Fatalf("case %d: σn = %v outside [σ3, σ1] = [%v, %v]", i, r.Normal, s3, s1)
 		case !scalar.EqualWithinAbsOrRel(r.Shear*r.Shear+r.Normal*r.Normal, r3.Norm2(tr), 1e-9, 1e-12):
 			t.Fatalf("case %d: τ² + σn² ≠ |t|²", i)
-		case r.DilationTendency < 0 || r.DilationTendency > 1:
-			t.Fatalf("case %d: Td = %v outside [0, 1]", i, r.DilationTendency)
 		case r.EffectiveNormal > 0 && r.NormalisedSlip > 1+1e-9:
 			t.Fatalf("case %d: Ts/Ts,max = %v > 1", i, r.NormalisedSlip)
-		case r.Rake <= -180 || r.Rake > 180:
-			t.Fatalf("case %d: rake %v outside (−180, 180]", i, r.Rake)
 		}
-		// Ts,max bounds Ts (Morris et al. 1996: it is the Mohr-circle tangent).
+		// The rake names the direction of the shear traction (Aki & Richards
+		// 1980 convention, derived): cos(rake)·strike + sin(rake)·up-dip is
+		// the unit vector of t − σn·n, the slip of the hanging wall.
+		if r.Shear > 1e-9 {
+			sr, cr := math.Sincos(r.Rake * math.Pi / 180)
+			slip := r3.Add(r3.Scale(cr, o.StrikeVec()), r3.Scale(sr, o.UpDip()))
+			shear := r3.Sub(tr, r3.Scale(r.Normal, o.Normal()))
+			if d := r3.Norm(r3.Sub(slip, r3.Scale(1/r3.Norm(shear), shear))); d > 1e-9 {
+				t.Fatalf("case %d: rake %v points %g away from the shear traction", i, r.Rake, d)
+			}
+		}
+	}
+}
+
+func TestDilationTendencyAtThePrincipalPlanes(t *testing.T) {
+	// Ferrill et al. (1999): Td = (σ1 − σn)/(σ1 − σ3) is 0 on the plane
+	// normal to σ1 and 1 on the plane normal to σ3, and σ2's plane sits at
+	// φ-complement 1 − (σ2 − σ3)/(σ1 − σ3) (derived from the definition).
+	const tol = 1e-9
+	rng := rand.New(rand.NewPCG(21, 22))
+	for range 200 {
+		s := dryState(randomTensor(rng))
+		p := s.Principal
+		want := [3]float64{0, (p.Values[0] - p.Values[1]) / (p.Values[0] - p.Values[2]), 1}
+		for i, a := range p.Axes {
+			r := Resolve(s, FromNormal(a), mu06)
+			if !scalar.EqualWithinAbs(r.DilationTendency, want[i], tol) {
+				t.Fatalf("plane normal to σ%d: Td = %v, want %v", i+1, r.DilationTendency, want[i])
+			}
+		}
 	}
 }
 

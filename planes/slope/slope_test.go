@@ -128,6 +128,7 @@ func TestFlexuralToppling(t *testing.T) {
 }
 
 func TestPlanarBlock(t *testing.T) {
+	const tol = 1e-12
 	const h, psiF, psiP, gamma = 30.0, 65.0, 35.0, 0.026
 	cot := func(a float64) float64 { return 1 / math.Tan(a*math.Pi/180) }
 	for _, z := range []float64{0.0001, 4, 8, 12} {
@@ -146,12 +147,20 @@ func TestPlanarBlock(t *testing.T) {
 		if !scalar.EqualWithinAbs(b.CrackDepth, z, 1e-9) {
 			t.Errorf("z = %v: crack depth came out %v", z, b.CrackDepth)
 		}
-		// The factor of safety of the published formula, by hand.
+		// The factor of safety by resolving the force vectors on the block
+		// (derived; a different route from the closed form in FS): x into the
+		// slope, y up; weight (0, −W), water in the crack (−V, 0) towards the
+		// face, uplift U along the base normal (−sin ψp, cos ψp); sliding
+		// down the base along (−cos ψp, −sin ψp).
 		c, phi, zw := 0.02, 32.0, 0.5*z
 		U, V := 0.5*insitu.Hydrostatic*zw*a, 0.5*insitu.Hydrostatic*zw*zw
 		sp, cp := math.Sincos(psiP * math.Pi / 180)
-		want := (c*a + (w*cp-U-V*sp)*math.Tan(phi*math.Pi/180)) / (w*sp + V*cp)
-		if got := b.FS(c, phi, zw); !scalar.EqualWithinAbsOrRel(got, want, 1e-12, 1e-12) {
+		down, normal := r3.Vec{X: -cp, Y: -sp}, r3.Vec{X: -sp, Y: cp}
+		weight, push := r3.Vec{Y: -w}, r3.Vec{X: -V}
+		drive := r3.Dot(r3.Add(weight, push), down)
+		onBase := -r3.Dot(r3.Add(weight, push), normal) - U
+		want := (c*a + onBase*math.Tan(phi*math.Pi/180)) / drive
+		if got := b.FS(c, phi, zw); !scalar.EqualWithinAbsOrRel(got, want, tol, tol) {
 			t.Errorf("z = %v: FS %v, want %v", z, got, want)
 		}
 	}
