@@ -147,11 +147,15 @@ func (p Polar) tensor(er, et, a r3.Vec) insitu.Tensor {
 // Ray is the stress field along one ray from the axis of an opening, with the
 // trigonometry of its angle and its directions in the NED frame worked out
 // once, for loops over the distance. Build it with Circle.Ray.
+//
+// Every polar component is a polynomial in q = (a/r)² of degree two (see
+// Circle.At), so the NED tensor on the ray is T₀ + q·T₁ + q²·T₂ with three
+// tensors fixed by the ray.
 type Ray struct {
 	c             *Circle
 	theta         float64
 	s, co, s2, c2 float64
-	er, et, along r3.Vec
+	t0, t1, t2    insitu.Tensor
 }
 
 // Ray returns the ray at theta (degrees from the crown) in the tunnel frame
@@ -160,11 +164,21 @@ type Ray struct {
 func (c *Circle) Ray(up, right, along r3.Vec, theta float64) Ray {
 	s, co := geom.SinCosDeg(theta)
 	s2, c2 := geom.SinCosDeg(2 * theta)
+	er := r3.Add(r3.Scale(co, up), r3.Scale(s, right))
+	et := r3.Add(r3.Scale(-s, up), r3.Scale(co, right))
+	f := &c.Far
+	m := (f.NN + f.EE) / 2
+	d := (f.NN - f.EE) / 2
+	g := d*c2 + f.NE*s2
+	h := -d*s2 + f.NE*c2
+	u := f.ND*co + f.ED*s
+	v := -f.ND*s + f.ED*co
+	p0 := Polar{R: m + g, Theta: m - g, RTheta: h, Z: f.DD, RZ: u, ThetaZ: v}
+	p1 := Polar{R: -m - 4*g + c.Support, Theta: m - c.Support, RTheta: 2 * h, Z: -4 * c.Poisson * g, RZ: -u, ThetaZ: v}
+	p2 := Polar{R: 3 * g, Theta: -3 * g, RTheta: -3 * h}
 	return Ray{
 		c: c, theta: theta, s: s, co: co, s2: s2, c2: c2,
-		er:    r3.Add(r3.Scale(co, up), r3.Scale(s, right)),
-		et:    r3.Add(r3.Scale(-s, up), r3.Scale(co, right)),
-		along: along,
+		t0: p0.tensor(er, et, along), t1: p1.tensor(er, et, along), t2: p2.tensor(er, et, along),
 	}
 }
 
@@ -176,7 +190,26 @@ func (y *Ray) Theta() float64 { return y.theta }
 func (y *Ray) At(r float64) Polar { return y.c.at(r, y.s, y.co, y.s2, y.c2) }
 
 // TensorAt returns the stress at distance r ≥ Radius (m) on the ray as a
-// tensor in the NED frame; see Polar.Tensor. It does not allocate.
+// tensor in the NED frame; see Polar.Tensor. It panics for r < Radius and
+// does not allocate.
 func (y *Ray) TensorAt(r float64) insitu.Tensor {
-	return y.c.at(r, y.s, y.co, y.s2, y.c2).tensor(y.er, y.et, y.along)
+	a := y.c.Radius
+	if !(r >= a*(1-1e-12)) {
+		panic(fmt.Sprintf("opening: point at r = %v m is inside the opening of radius %v m", r, a))
+	}
+	q := a / r
+	q *= q
+	if q > 1 {
+		q = 1 // r within rounding of the wall
+	}
+	q2 := q * q
+	t0, t1, t2 := &y.t0, &y.t1, &y.t2
+	return insitu.Tensor{
+		NN: t0.NN + q*t1.NN + q2*t2.NN,
+		EE: t0.EE + q*t1.EE + q2*t2.EE,
+		DD: t0.DD + q*t1.DD + q2*t2.DD,
+		NE: t0.NE + q*t1.NE + q2*t2.NE,
+		ND: t0.ND + q*t1.ND + q2*t2.ND,
+		ED: t0.ED + q*t1.ED + q2*t2.ED,
+	}
 }

@@ -92,6 +92,26 @@ func TestFieldFarAway(t *testing.T) {
 	}
 }
 
+func TestRayMatchesAt(t *testing.T) {
+	// The ray's polynomial form in q gives the same tensor as At and Tensor.
+	const tol = 1e-12 // relative to the far-field scale, ~30 MPa
+	rng := rand.New(rand.NewPCG(79, 80))
+	for range 100 {
+		c := mustCircle(t, randomFar(rng), 1+rng.Float64()*4, 0.2+rng.Float64()*0.2, rng.Float64()*2)
+		up, right, along := TunnelFrame(geom.Line{Trend: rng.Float64() * 360, Plunge: rng.Float64()*20 - 10})
+		th := rng.Float64() * 360
+		y := c.Ray(up, right, along, th)
+		for _, r := range []float64{c.Radius, c.Radius * (1 + rng.Float64()), c.Radius * (2 + rng.Float64()*10)} {
+			if got, want := y.TensorAt(r), c.At(r, th).Tensor(up, right, along, th); !sameTensor(got, want, tol*30) {
+				t.Fatalf("r %v θ %v: ray %+v, At %+v", r, th, got, want)
+			}
+			if got, want := y.At(r), c.At(r, th); got != want {
+				t.Fatalf("r %v θ %v: ray %+v, At %+v", r, th, got, want)
+			}
+		}
+	}
+}
+
 func TestKirschUniaxial(t *testing.T) {
 	// Kirsch (1898), uniaxial far field p along x1, θ from x1, as in Jaeger,
 	// Cook & Zimmerman (2007) §8.4 (derived by hand from the published form
