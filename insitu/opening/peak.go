@@ -32,14 +32,8 @@ func MaxTangential(far insitu.Tensor, support float64) Peak {
 	if b == 0 && c == 0 {
 		return Peak{Stress: a, Theta: 0}
 	}
-	th := math.Atan2(-c, -b) / 2 * geom.Deg // (−90, 90]
-	if th < 0 {
-		th += 180
-	}
-	if th >= 180 {
-		th = 0
-	}
-	return Peak{Stress: a + math.Hypot(b, c), Theta: th}
+	th := math.Atan2(-c, -b) / 2 * geom.Deg // [−90, 90]
+	return Peak{Stress: a + math.Hypot(b, c), Theta: halfTurn(th)}
 }
 
 // WallPrincipal returns the largest principal stress in the plane of the
@@ -91,14 +85,20 @@ func MaxWallPrincipal(far insitu.Tensor, nu, support float64) Peak {
 			best = Peak{Stress: fx, Theta: x}
 		}
 	}
-	best.Theta = math.Mod(best.Theta, 180)
-	if best.Theta < 0 {
-		best.Theta += 180
-	}
-	if best.Theta >= 180 {
-		best.Theta = 0
-	}
+	best.Theta = halfTurn(best.Theta)
 	return best
+}
+
+// halfTurn reduces an angle in degrees to [0, 180), with no negative zero.
+func halfTurn(th float64) float64 {
+	th = math.Mod(th, 180)
+	if th < 0 {
+		th += 180
+	}
+	if th >= 180 || th == 0 {
+		th = 0 // a tiny negative th rounds up to 180 above; −0 becomes +0
+	}
+	return th
 }
 
 // goldenMax returns the point in [lo, hi] where f is largest and the value

@@ -36,6 +36,12 @@ func TestMaxTangential(t *testing.T) {
 			t.Errorf("%+v, want 80 MPa at 45°", p)
 		}
 	})
+	t.Run("no negative zero", func(t *testing.T) {
+		// σ11 < σ22 and σ12 = 0 put the peak at the crown: atan2(−0, ·) = −0.
+		if p := MaxTangential(insitu.Tensor{NN: 20, EE: 22.5}, 0); p.Theta != 0 || math.Signbit(p.Theta) {
+			t.Errorf("crown peak at %v°, want +0", p.Theta)
+		}
+	})
 	t.Run("Brady and Brown", func(t *testing.T) {
 		// Brady & Brown eqs. 6.18–6.20 (read), derived: p = 10 vertical,
 		// K = 0.5: the sidewall (θ = 90°) carries the peak, 25 MPa.
