@@ -1,0 +1,127 @@
+package opening
+
+import (
+	"math"
+
+	"cleft/insitu"
+	"cleft/insitu/geom"
+)
+
+// Peak is the largest value round the wall of a stress of the opening and
+// where it occurs: Stress in MPa, compression positive, and Theta in
+// degrees from the crown, clockwise looking along the drive, in [0, 180).
+// The wall stresses of a uniform far field repeat every 180°, so the same
+// peak also occurs at Theta + 180.
+type Peak struct {
+	Stress, Theta float64
+}
+
+// MaxTangential returns the largest tangential stress at the wall of a
+// circular opening, from the closed form: with A = σ11 + σ22 − pᵢ,
+// B = 2(σ11 − σ22) and C = 4σ12 (far field in the tunnel frame, see Wall;
+// pᵢ the support pressure, MPa),
+//
+//	σθ(θ) = A − B cos 2θ − C sin 2θ,  σθ,max = A + √(B² + C²)  at 2θ = atan2(−C, −B)
+//
+// When the section is isotropic (B = C = 0) σθ is the same all round and
+// Theta is 0.
+func MaxTangential(far insitu.Tensor, support float64) Peak {
+	a := far.NN + far.EE - support
+	b := 2 * (far.NN - far.EE)
+	c := 4 * far.NE
+	if b == 0 && c == 0 {
+		return Peak{Stress: a, Theta: 0}
+	}
+	th := math.Atan2(-c, -b) / 2 * geom.Deg // [−90, 90]
+	return Peak{Stress: a + math.Hypot(b, c), Theta: halfTurn(th)}
+}
+
+// WallPrincipal returns the largest principal stress in the plane of the
+// wall (the tangent plane, spanned by eθ and the axis):
+//
+//	σmax = (σθ + σz)/2 + √((σθ − σz)²/4 + τθz²)
+//
+// The third principal stress at the wall is σr = pᵢ, normal to it.
+func (w WallStress) WallPrincipal() float64 {
+	h := (w.Theta - w.Z) / 2
+	return (w.Theta+w.Z)/2 + math.Sqrt(h*h+w.ThetaZ*w.ThetaZ)
+}
+
+// MaxWallPrincipal returns the largest principal stress in the plane of the
+// wall round a circular opening (WallStress.WallPrincipal, with σθ lowered
+// by the support pressure pᵢ, MPa) and where it occurs. far is the far
+// field in the tunnel frame, nu Poisson's ratio. The largest principal
+// stress at the wall overall is max(Stress, pᵢ): σr = pᵢ is the third.
+//
+// σmax(θ) has period 180°. It is sampled every 2.5° to bracket each local
+// maximum, and each bracket is then narrowed by golden-section search to
+// 1e-9° before the largest is kept: the peak is located, not read off the
+// samples. A flat σmax (an isotropic section with τθz = 0) gives the first
+// sample, Theta = 0. MaxWallPrincipal does not allocate.
+func MaxWallPrincipal(far insitu.Tensor, nu, support float64) Peak {
+	f := func(th float64) float64 {
+		w := Wall(far, th, nu)
+		w.Theta -= support
+		return w.WallPrincipal()
+	}
+	const n = 72
+	const step = 180.0 / n
+	var v [n]float64
+	for k := range v {
+		v[k] = f(float64(k) * step)
+	}
+	best := Peak{Stress: math.Inf(-1)}
+	for k := range v {
+		prev, next := v[(k+n-1)%n], v[(k+1)%n]
+		if !(v[k] >= prev && v[k] >= next) {
+			continue
+		}
+		th := float64(k) * step
+		x, fx := goldenMax(f, th-step, th+step, 1e-9)
+		if fx < v[k] {
+			x, fx = th, v[k]
+		}
+		if fx > best.Stress {
+			best = Peak{Stress: fx, Theta: x}
+		}
+	}
+	best.Theta = halfTurn(best.Theta)
+	return best
+}
+
+// halfTurn reduces an angle in degrees to [0, 180), with no negative zero.
+func halfTurn(th float64) float64 {
+	th = math.Mod(th, 180)
+	if th < 0 {
+		th += 180
+	}
+	if th >= 180 || th == 0 {
+		th = 0 // a tiny negative th rounds up to 180 above; −0 becomes +0
+	}
+	return th
+}
+
+// goldenMax returns the point in [lo, hi] where f is largest and the value
+// there, by golden-section search to a bracket narrower than tol, for an f
+// with one maximum in the bracket. It does not allocate.
+func goldenMax(f func(float64) float64, lo, hi, tol float64) (x, fx float64) {
+	const g = 0.6180339887498949 // (√5 − 1)/2
+	x1 := hi - g*(hi-lo)
+	x2 := lo + g*(hi-lo)
+	f1, f2 := f(x1), f(x2)
+	for hi-lo > tol {
+		if f1 >= f2 {
+			hi, x2, f2 = x2, x1, f1
+			x1 = hi - g*(hi-lo)
+			f1 = f(x1)
+		} else {
+			lo, x1, f1 = x1, x2, f2
+			x2 = lo + g*(hi-lo)
+			f2 = f(x2)
+		}
+	}
+	if f1 >= f2 {
+		return x1, f1
+	}
+	return x2, f2
+}

@@ -1,0 +1,276 @@
+package tunnel
+
+import (
+	"fmt"
+	"math"
+
+	"cleft/insitu"
+	"cleft/insitu/geom"
+	"cleft/insitu/opening"
+	"cleft/planes"
+
+	"gonum.org/v1/gonum/spatial/r3"
+)
+
+// Find returns the zone round the opening of st where the plane o, judged
+// by the criterion c, is critical or opening under the stress in the rock
+// (opening.Circle.At as a NED tensor, the pore pressure st.Pore(r), resolved
+// by planes.ResolveTo), searched on the grid g.
+//
+// Each ray is sampled from the wall to g.Outer·a in equal steps no longer
+// than g.Step·a; where the plane's state changes between two samples the
+// boundary is found by bisection on that state (the verdict of
+// planes.ResolveTo itself, not a proxy margin) to 1e-9·a. The ray with the
+// deepest zone, and the one with the deepest opening part, are then refined
+// in angle by golden-section search between their neighbours. The zone's
+// area is Σ Δθ·½(r_out² − r_in²) over the parts inside on every ray.
+// Parts of the zone thinner than one step along every ray, or narrower than
+// the angle between rays, can be missed.
+//
+// If outline is not nil it must have g.Rays elements and receives the span
+// of the zone on each ray. Find panics if g is out of range or outline has
+// the wrong length. Find allocates only for the far-field state, once per
+// call (insitu.NewState); the search itself does not allocate.
+func Find(st *Station, o *planes.Orientation, c planes.Criterion, g Grid, outline []Span) Zone {
+	g = g.resolved()
+	if outline != nil && len(outline) != g.Rays {
+		panic(fmt.Sprintf("tunnel: outline has %d spans for %d rays", len(outline), g.Rays))
+	}
+	var p probe
+	p.init(st, o, c, g)
+	nan := math.NaN()
+	z := Zone{Depth: nan, Angle: nan, OpeningDepth: nan, FarField: p.res.State}
+
+	dth := 360.0 / float64(g.Rays)
+	bestK, openK := -1, -1
+	var best, bestOpen, sq float64
+	for k := range g.Rays {
+		th := float64(k) * dth
+		ray := st.Opening.Ray(st.Up, st.Right, st.Along, th)
+		s := p.scan(&ray)
+		if outline != nil {
+			outline[k] = Span{Theta: th, Inner: s.inner, Outer: s.outer}
+		}
+		if math.IsNaN(s.inner) {
+			continue
+		}
+		z.Flags |= Exists | s.flags
+		sq += s.sq
+		if s.outer > best {
+			best, bestK = s.outer, k
+		}
+		if s.openOuter > bestOpen {
+			bestOpen, openK = s.openOuter, k
+		}
+	}
+	if bestK < 0 {
+		return z
+	}
+	z.Area = sq / 2 * dth * geom.Rad
+	angle := float64(bestK) * dth
+	if best < p.rOut {
+		angle, best = p.refine(angle, dth, best, isZone)
+	}
+	z.Depth, z.Angle = best-p.a, geom.Azimuth(angle)
+	if openK >= 0 {
+		if bestOpen < p.rOut {
+			_, bestOpen = p.refine(float64(openK)*dth, dth, bestOpen, isOpen)
+		}
+		z.OpeningDepth = bestOpen - p.a
+	}
+	return z
+}
+
+// Which part of the zone a search follows.
+const (
+	isZone = iota // critical or opening
+	isOpen        // opening only
+)
+
+// probe evaluates the plane's state at points of the rock. Its state s has
+// the far field's principal stresses, computed once: ResolveTo reads
+// Principal only for its relative shear floor (1e-12 of the largest
+// principal magnitude) and for the slip-tendency ratio and dilation
+// tendency, which a zone does not use; State, FactorOfSafety and
+// PressureToSlip depend on Total, the pore pressure and the criterion. This
+// keeps the search free of an eigen-decomposition per point (tested against
+// a fresh insitu.NewState at each point).
+type probe struct {
+	st  *Station
+	o   *planes.Orientation
+	c   planes.Criterion
+	s   insitu.State
+	res planes.Result
+
+	a, rOut, h float64
+	m, nb      int // steps per ray, bisection halvings
+}
+
+func (p *probe) init(st *Station, o *planes.Orientation, c planes.Criterion, g Grid) {
+	p.st, p.o, p.c = st, o, c
+	p.a = st.Opening.Radius
+	p.rOut = g.Outer * p.a
+	p.m = int(math.Ceil((g.Outer - 1) / g.Step * (1 - 1e-12)))
+	p.h = (p.rOut - p.a) / float64(p.m)
+	const rootTol = 1e-9 // of the radius
+	p.nb = int(math.Ceil(math.Log2(p.h / (rootTol * p.a))))
+	// The far field in NED: the rows of the tunnel frame turned back.
+	u, r, l := st.Up, st.Right, st.Along
+	far := st.Opening.Far.Rotate([3]r3.Vec{{X: u.X, Y: r.X, Z: l.X}, {X: u.Y, Y: r.Y, Z: l.Y}, {X: u.Z, Y: r.Z, Z: l.Z}})
+	p.s = insitu.NewState(far, st.Depth, st.Pore(p.rOut), st.Biot)
+	planes.ResolveTo(&p.res, &p.s, p.o, p.c)
+}
+
+// in reports whether the point at r on ray y is in the part of the zone
+// followed by mode.
+func (p *probe) in(y *opening.Ray, r float64, mode int) bool {
+	p.s.Total = y.TensorAt(r)
+	p.s.PorePressure = p.st.Pore(r)
+	planes.ResolveTo(&p.res, &p.s, p.o, p.c)
+	if mode == isOpen {
+		return p.res.State == planes.Opening
+	}
+	return p.res.State != planes.Stable
+}
+
+// bisect returns the boundary of the mode's part between lo and hi, where
+// the state at lo is inLo and the state at hi is not.
+func (p *probe) bisect(y *opening.Ray, lo, hi float64, inLo bool, mode int) float64 {
+	for range p.nb {
+		mid := (lo + hi) / 2
+		if p.in(y, mid, mode) == inLo {
+			lo = mid
+		} else {
+			hi = mid
+		}
+	}
+	return (lo + hi) / 2
+}
+
+// rayScan is the zone on one ray: least and greatest radius (NaN for none),
+// Σ(r_out² − r_in²) over its parts, the greatest radius of its opening part
+// (0 for none) and the flags it sets.
+type rayScan struct {
+	inner, outer, sq, openOuter float64
+	flags                       Flags
+}
+
+func (p *probe) scan(y *opening.Ray) rayScan {
+	s := rayScan{inner: math.NaN(), outer: math.NaN()}
+	r0 := p.a
+	p.in(y, r0, isZone)
+	st0 := p.res.State
+	in0, op0 := st0 != planes.Stable, st0 == planes.Opening
+	start := r0
+	if in0 {
+		s.inner = r0
+		s.flags |= AtWall
+	}
+	if op0 {
+		s.openOuter = r0
+		s.flags |= Opens
+	}
+	for j := 1; j <= p.m; j++ {
+		r := p.a + float64(j)*p.h
+		if j == p.m {
+			r = p.rOut
+		}
+		p.in(y, r, isZone)
+		st := p.res.State
+		in, op := st != planes.Stable, st == planes.Opening
+		if in != in0 {
+			b := p.bisect(y, r0, r, in0, isZone)
+			if in {
+				start = b
+				if math.IsNaN(s.inner) {
+					s.inner = b
+				}
+			} else {
+				s.sq += b*b - start*start
+				s.outer = b
+			}
+		}
+		if op {
+			s.openOuter = r
+			s.flags |= Opens
+		} else if op0 {
+			s.openOuter = p.bisect(y, r0, r, true, isOpen)
+			s.flags |= Opens
+		}
+		r0, in0, op0 = r, in, op
+	}
+	if in0 {
+		s.sq += p.rOut*p.rOut - start*start
+		s.outer = p.rOut
+		s.flags |= ReachesOuter
+	}
+	return s
+}
+
+// refine narrows the deepest point of the mode's part near angle th (degrees),
+// whose neighbouring rays are dth away, by golden-section search on the
+// radius of the part's outer edge, and returns the better of the refined and
+// the sampled point (th, r).
+func (p *probe) refine(th, dth, r float64, mode int) (float64, float64) {
+	f := func(t float64) float64 {
+		y := p.st.Opening.Ray(p.st.Up, p.st.Right, p.st.Along, t)
+		return p.edge(&y, r, mode)
+	}
+	const angleTol = 1e-6 // degrees
+	t, e := goldenMax(f, th-dth, th+dth, angleTol)
+	if e > r {
+		return t, e
+	}
+	return th, r
+}
+
+// edge returns the outer edge of the mode's part on ray y next to r0: walking
+// out from r0 by grid steps while inside, or in while outside, then
+// bisecting. It returns the wall radius when no part lies inside r0.
+func (p *probe) edge(y *opening.Ray, r0 float64, mode int) float64 {
+	if p.in(y, r0, mode) {
+		for lo := r0; ; {
+			hi := math.Min(lo+p.h, p.rOut)
+			if !p.in(y, hi, mode) {
+				return p.bisect(y, lo, hi, true, mode)
+			}
+			if hi == p.rOut {
+				return p.rOut
+			}
+			lo = hi
+		}
+	}
+	for hi := r0; hi > p.a; {
+		lo := math.Max(hi-p.h, p.a)
+		if p.in(y, lo, mode) {
+			return p.bisect(y, lo, hi, true, mode)
+		}
+		hi = lo
+	}
+	return p.a
+}
+
+// goldenMax returns the point in [lo, hi] where f is largest and the value
+// there, by golden-section search to a bracket narrower than tol, for an f
+// with one maximum in the bracket.
+func goldenMax(f func(float64) float64, lo, hi, tol float64) (x, fx float64) {
+	const g = 0.6180339887498949 // (√5 − 1)/2
+	x1 := hi - g*(hi-lo)
+	x2 := lo + g*(hi-lo)
+	f1, f2 := f(x1), f(x2)
+	for hi-lo > tol {
+		if f1 >= f2 {
+			hi, x2, f2 = x2, x1, f1
+			x1 = hi - g*(hi-lo)
+			f1 = f(x1)
+		} else {
+			lo, x1, f1 = x1, x2, f2
+			x2 = lo + g*(hi-lo)
+			f2 = f(x2)
+		}
+	}
+	if f1 >= f2 {
+		return x1, f1
+	}
+	return x2, f2
+}
