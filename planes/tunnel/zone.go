@@ -1,7 +1,3 @@
-// Package tunnel judges the planes round a tunnel against the stresses in
-// the rock about it. Stresses are MPa, compression positive; lengths are
-// metres; angles round the tunnel are degrees from the crown, clockwise
-// looking along the drive (the tunnel frame of cleft/insitu/opening).
 package tunnel
 
 import (
@@ -14,25 +10,25 @@ import (
 	"gonum.org/v1/gonum/spatial/r3"
 )
 
-// Station is one place along a tunnel: the opening in its far field, the
+// Section is the cross-section of a tunnel at one station: the opening in its far field, the
 // tunnel frame's axes in the NED frame, the depth (m), Biot's coefficient
-// and the pore-pressure rule. Build it with NewStation.
-type Station struct {
+// and the pore-pressure rule. Build it with NewSection.
+type Section struct {
 	Opening          opening.Circle
 	Up, Right, Along r3.Vec
 	Depth, Biot      float64
 	Pore             PorePressure
 }
 
-// NewStation returns the station of the opening c (far field in the tunnel
+// NewSection returns the station of the opening c (far field in the tunnel
 // frame whose NED axes are up, right, along; see opening.TunnelFrame) at
 // depth ≥ 0 m, with Biot's coefficient ∈ (0, 1] and the pore-pressure rule
 // pore (nil for dry rock). It is an error for c to be invalid (see
 // opening.NewCircle), for the axes not to be a right-handed orthonormal
 // triad (to 1e-9), or for pore to give a non-finite pressure at the wall.
-func NewStation(c opening.Circle, up, right, along r3.Vec, depth, biot float64, pore PorePressure) (Station, error) {
+func NewSection(c opening.Circle, up, right, along r3.Vec, depth, biot float64, pore PorePressure) (Section, error) {
 	if _, err := opening.NewCircle(c.Far, c.Radius, c.Poisson, c.Support); err != nil {
-		return Station{}, err
+		return Section{}, err
 	}
 	const axisTol = 1e-9
 	for _, d := range [...]float64{
@@ -41,22 +37,22 @@ func NewStation(c opening.Circle, up, right, along r3.Vec, depth, biot float64, 
 		r3.Dot(r3.Cross(up, right), along) - 1,
 	} {
 		if !(math.Abs(d) <= axisTol) {
-			return Station{}, fmt.Errorf("tunnel axes %v, %v, %v: want a right-handed orthonormal triad", up, right, along)
+			return Section{}, fmt.Errorf("tunnel axes %v, %v, %v: want a right-handed orthonormal triad", up, right, along)
 		}
 	}
 	if math.IsNaN(depth) || math.IsInf(depth, 0) || depth < 0 {
-		return Station{}, fmt.Errorf("depth %v m: want a finite number ≥ 0", depth)
+		return Section{}, fmt.Errorf("depth %v m: want a finite number ≥ 0", depth)
 	}
 	if math.IsNaN(biot) || biot <= 0 || biot > 1 {
-		return Station{}, fmt.Errorf("Biot coefficient %v: want a number in (0, 1]", biot)
+		return Section{}, fmt.Errorf("Biot coefficient %v: want a number in (0, 1]", biot)
 	}
 	if pore == nil {
 		pore = Constant(0)
 	}
 	if p := pore(c.Radius); math.IsNaN(p) || math.IsInf(p, 0) {
-		return Station{}, fmt.Errorf("pore pressure %v MPa at the wall: want a finite number", p)
+		return Section{}, fmt.Errorf("pore pressure %v MPa at the wall: want a finite number", p)
 	}
-	return Station{Opening: c, Up: up, Right: right, Along: along, Depth: depth, Biot: biot, Pore: pore}, nil
+	return Section{Opening: c, Up: up, Right: right, Along: along, Depth: depth, Biot: biot, Pore: pore}, nil
 }
 
 // Grid is the polar grid of a zone search: Rays rays at equal angles from

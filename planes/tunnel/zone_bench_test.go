@@ -13,7 +13,7 @@ var sinkZone Zone
 // benchStation is an oblique case: a drive 030/05 under SHmax 30 MPa at
 // azimuth 065, Shmin 15, Sv 20, hydrostatic pore pressure 2 MPa, and the
 // plane 60/110 with μ = 0.5.
-func benchStation(b *testing.B) (Station, planes.Orientation, planes.Criterion) {
+func benchStation(b *testing.B) (Section, planes.Orientation, planes.Criterion) {
 	s, c := geom.SinCosDeg(65)
 	ned := insitu.Tensor{NN: 30*c*c + 15*s*s, EE: 30*s*s + 15*c*c, DD: 20, NE: 15 * c * s}
 	st := station(b, ned, geom.Line{Trend: 30, Plunge: 5}, 4, 0.25, 0, 1, Constant(2))

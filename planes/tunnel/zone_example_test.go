@@ -19,7 +19,7 @@ func ExampleFind() {
 	if err != nil {
 		panic(err)
 	}
-	st, err := tunnel.NewStation(c, up, right, along, 250, 1, nil)
+	st, err := tunnel.NewSection(c, up, right, along, 250, 1, nil)
 	if err != nil {
 		panic(err)
 	}

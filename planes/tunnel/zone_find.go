@@ -31,7 +31,7 @@ import (
 // of the zone on each ray. Find panics if g is out of range or outline has
 // the wrong length. Find allocates only for the far-field state, once per
 // call (insitu.NewState); the search itself does not allocate.
-func Find(st *Station, o *planes.Orientation, c planes.Criterion, g Grid, outline []Span) Zone {
+func Find(st *Section, o *planes.Orientation, c planes.Criterion, g Grid, outline []Span) Zone {
 	g = g.resolved()
 	if outline != nil && len(outline) != g.Rays {
 		panic(fmt.Sprintf("tunnel: outline has %d spans for %d rays", len(outline), g.Rays))
@@ -96,7 +96,7 @@ const (
 // keeps the search free of an eigen-decomposition per point (tested against
 // a fresh insitu.NewState at each point).
 type probe struct {
-	st  *Station
+	st  *Section
 	o   *planes.Orientation
 	c   planes.Criterion
 	s   insitu.State
@@ -106,7 +106,7 @@ type probe struct {
 	m, nb      int // steps per ray, bisection halvings
 }
 
-func (p *probe) init(st *Station, o *planes.Orientation, c planes.Criterion, g Grid) {
+func (p *probe) init(st *Section, o *planes.Orientation, c planes.Criterion, g Grid) {
 	p.st, p.o, p.c = st, o, c
 	p.a = st.Opening.Radius
 	p.rOut = g.Outer * p.a

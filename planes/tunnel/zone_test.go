@@ -15,14 +15,14 @@ import (
 
 // station returns the station of a drive along l with the far field ned
 // (NED frame) turned into the tunnel frame.
-func station(t testing.TB, ned insitu.Tensor, l geom.Line, a, nu, pi, biot float64, pore PorePressure) Station {
+func station(t testing.TB, ned insitu.Tensor, l geom.Line, a, nu, pi, biot float64, pore PorePressure) Section {
 	t.Helper()
 	up, right, along := opening.TunnelFrame(l)
 	c, err := opening.NewCircle(ned.Rotate([3]r3.Vec{up, right, along}), a, nu, pi)
 	if err != nil {
 		t.Fatal(err)
 	}
-	st, err := NewStation(c, up, right, along, 200, biot, pore)
+	st, err := NewSection(c, up, right, along, 200, biot, pore)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -213,7 +213,7 @@ func TestNewStationErrors(t *testing.T) {
 		{"nan pore", good, up, right, along, 100, 1, nanPore},
 	} {
 		t.Run(c.name, func(t *testing.T) {
-			if _, err := NewStation(c.c, c.up, c.r, c.a, c.depth, c.biot, c.pore); err == nil {
+			if _, err := NewSection(c.c, c.up, c.r, c.a, c.depth, c.biot, c.pore); err == nil {
 				t.Error("no error")
 			}
 		})
