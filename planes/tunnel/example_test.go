@@ -1,0 +1,39 @@
+package tunnel_test
+
+import (
+	"fmt"
+	"math"
+
+	"cleft/insitu"
+	"cleft/planes"
+	"cleft/planes/tunnel"
+)
+
+// A 400 m drive towards 090° under 60 to 200 m of cover, in a strike-slip
+// far field with SHmax along 045°, against one steep joint set striking
+// across the drive.
+func ExampleScreen() {
+	m, _ := insitu.NewGradientModel(0.026,
+		insitu.Horizontal{Kind: insitu.Ratio, Value: 1.5}, insitu.Horizontal{Kind: insitu.Ratio, Value: 0.8},
+		45, insitu.Water{Gradient: insitu.Hydrostatic, Table: 20, Biot: 1})
+	t := tunnel.Tunnel{
+		Legs:    []tunnel.Leg{{From: 0, To: 400, Trend: 90}},
+		Cover:   [][2]float64{{0, 60}, {400, 200}},
+		Spacing: 100, Radius: 3, UCS: 60, Poisson: 0.25, Drained: true,
+	}
+	joint := tunnel.Target{Name: "J1", Orientation: planes.MustNew(75, 270), Criterion: &planes.Coulomb{Mu: 0.6}, PoreExcess: math.NaN()}
+	sc, err := tunnel.Screen(t, m, []tunnel.Target{joint})
+	if err != nil {
+		panic(err)
+	}
+	for _, st := range sc.Stations {
+		r := st.Rows[0]
+		fmt.Printf("%3.0f m: σθ,max/UCS %.2f, J1 %s FS %.2f, critical on the wall at %v\n", st.Chainage, st.Ratio, r.Drive.Class, r.Far.FactorOfSafety, r.Critical)
+	}
+	// Output:
+	// 0 m: σθ,max/UCS 0.07, J1 fair FS 1.56, critical on the wall at [{160 190} {340 10}]
+	// 100 m: σθ,max/UCS 0.10, J1 fair FS 1.48, critical on the wall at [{160 190} {340 10}]
+	// 200 m: σθ,max/UCS 0.14, J1 fair FS 1.45, critical on the wall at [{160 190} {340 10}]
+	// 300 m: σθ,max/UCS 0.18, J1 fair FS 1.42, critical on the wall at [{160 190} {340 10}]
+	// 400 m: σθ,max/UCS 0.22, J1 fair FS 1.41, critical on the wall at [{160 190} {340 10}]
+}
