@@ -31,6 +31,7 @@ func BenchmarkDraw(b *testing.B) {
 	}{
 		{"20000x8/uncorrelated", nil},
 		{"20000x8/one-pair", []Pair{{0, 1, 0.6}}},
+		{"20000x8/all-paired", []Pair{{0, 1, 0.6}, {2, 3, -0.3}, {4, 5, 0.4}, {6, 7, 0.2}}},
 	} {
 		b.Run(c.name, func(b *testing.B) {
 			b.ReportAllocs()

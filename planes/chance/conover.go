@@ -9,67 +9,74 @@ import (
 	"gonum.org/v1/gonum/mat"
 )
 
-// targetFactor checks pairs and returns the Cholesky factor of the Pearson
-// target C′ᵢⱼ = 2·sin(π·Cᵢⱼ/6) of the rank-correlation matrix C they give.
+// targetFactor checks pairs against k inputs and returns the inputs they
+// name, ascending, and the Cholesky factor of the Pearson target
+// C′ᵢⱼ = 2·sin(π·Cᵢⱼ/6) of the rank-correlation matrix C among those inputs.
 // Both C and C′ are built pair by pair, so that a failure names the first
 // pair that makes the matrix not positive definite.
-func targetFactor(k int, pairs []Pair) (*mat.Cholesky, error) {
+func targetFactor(k int, pairs []Pair) (cols []int, chol *mat.Cholesky, err error) {
 	seen := make(map[[2]int]bool, len(pairs))
 	for p, c := range pairs {
 		bad := func(err error) error { return &CorrelationError{Pair: p, A: c.A, B: c.B, Rho: c.Rho, Err: err} }
 		switch {
 		case c.A < 0 || c.A >= k || c.B < 0 || c.B >= k:
-			return nil, bad(ErrIndex)
+			return nil, nil, bad(ErrIndex)
 		case c.A == c.B:
-			return nil, bad(ErrSelf)
+			return nil, nil, bad(ErrSelf)
 		case !(c.Rho > -1 && c.Rho < 1):
-			return nil, bad(ErrRho)
+			return nil, nil, bad(ErrRho)
 		}
 		key := [2]int{min(c.A, c.B), max(c.A, c.B)}
 		if seen[key] {
-			return nil, bad(ErrDuplicate)
+			return nil, nil, bad(ErrDuplicate)
 		}
 		seen[key] = true
+		cols = append(cols, c.A, c.B)
 	}
-	var chol mat.Cholesky
+	slices.Sort(cols)
+	cols = slices.Compact(cols)
+	at := func(j int) int { i, _ := slices.BinarySearch(cols, j); return i }
+	m := len(cols)
+	chol = new(mat.Cholesky)
 	for _, pearson := range []bool{false, true} {
-		m := mat.NewSymDense(k, nil)
-		for i := range k {
-			m.SetSym(i, i, 1)
+		c := mat.NewSymDense(m, nil)
+		for i := range m {
+			c.SetSym(i, i, 1)
 		}
-		for p, c := range pairs {
-			r := c.Rho
+		for p, pr := range pairs {
+			r := pr.Rho
 			if pearson {
 				r = 2 * math.Sin(math.Pi*r/6)
 			}
-			m.SetSym(c.A, c.B, r)
-			if !chol.Factorize(m) {
-				return nil, &CorrelationError{Pair: p, A: c.A, B: c.B, Rho: c.Rho, Err: ErrNotPosDef}
+			c.SetSym(at(pr.A), at(pr.B), r)
+			if !chol.Factorize(c) {
+				return nil, nil, &CorrelationError{Pair: p, A: pr.A, B: pr.B, Rho: pr.Rho, Err: ErrNotPosDef}
 			}
 		}
 	}
-	return &chol, nil
+	return cols, chol, nil
 }
 
-// rearrange reorders each column of the n × k row-major x (stride k) to the
+// rearrange reorders the columns cols of the n × stride row-major x to the
 // ranks of the Iman–Conover scores R·Q⁻¹·P, P the upper Cholesky factor of
-// target. It reports false if the scores' correlation is not positive
-// definite.
-func rearrange(x []float64, n, k int, target *mat.Cholesky, seed uint64) bool {
+// target (over cols). It reports false if the scores' correlation is not
+// positive definite.
+func rearrange(x []float64, n, stride int, cols []int, target *mat.Cholesky, seed uint64) bool {
+	k := len(cols)
 	scores := make([]float64, n)
 	for i := range scores {
 		scores[i] = normalQuantile(float64(i+1) / float64(n+1))
 	}
 	r := make([]float64, n*k)
 	var src rand.ChaCha8
-	for j := range k {
-		src.Seed(key(seed, purposeScores, uint64(j)))
-		col := slices.Clone(scores)
+	for j, col := range cols {
+		src.Seed(key(seed, purposeScores, uint64(col)))
+		perm := slices.Clone(scores)
 		for i := n - 1; i > 0; i-- { // Fisher–Yates
 			hi, _ := bits.Mul64(src.Uint64(), uint64(i+1))
-			col[i], col[hi] = col[hi], col[i]
+			perm[i], perm[hi] = perm[hi], perm[i]
 		}
-		for i, v := range col {
+		for i, v := range perm {
 			r[i*k+j] = v
 		}
 	}
@@ -111,10 +118,10 @@ func rearrange(x []float64, n, k int, target *mat.Cholesky, seed uint64) bool {
 	}
 	order := make([]keyed, n)
 	vals := make([]float64, n)
-	for j := range k {
+	for j, col := range cols {
 		for i := range n {
 			order[i] = keyed{r[i*k+j], int32(i)}
-			vals[i] = x[i*k+j]
+			vals[i] = x[i*stride+col]
 		}
 		slices.SortFunc(order, func(a, b keyed) int { // scores are never NaN
 			switch {
@@ -127,7 +134,7 @@ func rearrange(x []float64, n, k int, target *mat.Cholesky, seed uint64) bool {
 		})
 		slices.Sort(vals)
 		for rank, o := range order {
-			x[int(o.i)*k+j] = vals[rank]
+			x[int(o.i)*stride+col] = vals[rank]
 		}
 	}
 	return true

@@ -14,10 +14,10 @@
 //     reproducible and cheap.
 //   - Draw returns n realisations × k inputs, row i being realisation i.
 //     Each input's uniforms come from a stream of its own (simple random
-//     sampling, not a Latin hypercube), so without correlations adding an
-//     input does not change the others. Rank correlations are induced by
-//     the method of Iman & Conover (1982), which reorders every column and
-//     leaves its values (the marginal sample) unchanged.
+//     sampling, not a Latin hypercube), so adding an input that is not
+//     correlated does not change the others. Rank correlations are induced by the method of Iman &
+//     Conover (1982), which reorders the correlated columns and leaves
+//     their values (the marginal sample) unchanged.
 //   - Every random stream is ChaCha8 keyed by (seed, purpose, index), so a
 //     realisation's draws depend on the seed and its index only, never on the
 //     number of workers or the order in which they run.

@@ -20,13 +20,13 @@ type Pair struct {
 // Sampling: column j is dists[j].Quantile of n independent uniforms on
 // (0, 1) from the ChaCha8 stream keyed by (seed, j) (simple random sampling;
 // no Latin hypercube), so a column does not depend on the other inputs
-// unless correlations are asked for.
+// unless it is named in a pair.
 //
-// Correlation: when pairs is not empty, every column is reordered by the
-// method of Iman & Conover (1982) so that the sample rank correlations
-// approach the target matrix C (1 on the diagonal, Rho for each pair, 0
-// elsewhere; the zeros are targets too, which damps chance correlation
-// between the other inputs). Each column of a score matrix R is a random
+// Correlation: the m inputs named in pairs are reordered by the method of
+// Iman & Conover (1982) so that their sample rank correlations approach
+// the target C (1 on the diagonal, Rho for each pair, 0 for two of them not
+// paired: those zeros are targets too); the other inputs keep their
+// independent draws. Each column of an n × m score matrix R is a random
 // permutation of the van der Waerden scores Φ⁻¹(i/(n + 1)), i = 1…n; with
 // E = QᵀQ the Cholesky factorisation of the correlation of R and C′ = PᵀP
 // that of the target, the columns of R·Q⁻¹·P have Pearson correlation
@@ -39,8 +39,8 @@ type Pair struct {
 //
 // Errors: a bad pair (index out of range, an input paired with itself, a
 // pair given twice, Rho not in (−1, 1)) or a target C or C′ that is not
-// positive definite is a *CorrelationError naming the pair; with pairs,
-// n ≤ k returns ErrRealisations. Draw panics if dists is empty or n < 1.
+// positive definite is a *CorrelationError naming the pair; n ≤ m returns
+// ErrRealisations. Draw panics if dists is empty or n < 1.
 // Draw is serial and deterministic: the same arguments give the same
 // matrix on any machine with the same float64 arithmetic.
 func Draw(dists []Dist, pairs []Pair, n int, seed uint64) (*mat.Dense, error) {
@@ -51,14 +51,17 @@ func Draw(dists []Dist, pairs []Pair, n int, seed uint64) (*mat.Dense, error) {
 	if n < 1 {
 		panic("chance: Draw with fewer than one realisation")
 	}
-	var target *mat.Cholesky
+	var (
+		cols   []int
+		target *mat.Cholesky
+	)
 	if len(pairs) > 0 {
 		var err error
-		if target, err = targetFactor(k, pairs); err != nil {
+		if cols, target, err = targetFactor(k, pairs); err != nil {
 			return nil, err
 		}
-		if n <= k {
-			return nil, fmt.Errorf("%w: %d realisations for %d inputs", ErrRealisations, n, k)
+		if n <= len(cols) {
+			return nil, fmt.Errorf("%w: %d realisations for %d correlated inputs", ErrRealisations, n, len(cols))
 		}
 	}
 	x := mat.NewDense(n, k, nil)
@@ -71,8 +74,8 @@ func Draw(dists []Dist, pairs []Pair, n int, seed uint64) (*mat.Dense, error) {
 		}
 	}
 	if target != nil {
-		if !rearrange(raw.Data, n, k, target, seed) {
-			return nil, fmt.Errorf("%w: score correlation singular with %d realisations for %d inputs", ErrRealisations, n, k)
+		if !rearrange(raw.Data, n, raw.Stride, cols, target, seed) {
+			return nil, fmt.Errorf("%w: score correlation singular with %d realisations for %d correlated inputs", ErrRealisations, n, len(cols))
 		}
 	}
 	return x, nil
