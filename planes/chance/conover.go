@@ -17,7 +17,7 @@ import (
 func targetFactor(k int, pairs []Pair) (cols []int, chol *mat.Cholesky, err error) {
 	seen := make(map[[2]int]bool, len(pairs))
 	for p, c := range pairs {
-		bad := func(err error) error { return &CorrelationError{Pair: p, A: c.A, B: c.B, Rho: c.Rho, Err: err} }
+		bad := func(e error) error { return &CorrelationError{Pair: p, A: c.A, B: c.B, Rho: c.Rho, Err: e} }
 		switch {
 		case c.A < 0 || c.A >= k || c.B < 0 || c.B >= k:
 			return nil, nil, bad(ErrIndex)
@@ -26,11 +26,11 @@ func targetFactor(k int, pairs []Pair) (cols []int, chol *mat.Cholesky, err erro
 		case !(c.Rho > -1 && c.Rho < 1):
 			return nil, nil, bad(ErrRho)
 		}
-		key := [2]int{min(c.A, c.B), max(c.A, c.B)}
-		if seen[key] {
+		ab := [2]int{min(c.A, c.B), max(c.A, c.B)}
+		if seen[ab] {
 			return nil, nil, bad(ErrDuplicate)
 		}
-		seen[key] = true
+		seen[ab] = true
 		cols = append(cols, c.A, c.B)
 	}
 	slices.Sort(cols)
@@ -50,7 +50,11 @@ func targetFactor(k int, pairs []Pair) (cols []int, chol *mat.Cholesky, err erro
 			}
 			c.SetSym(at(pr.A), at(pr.B), r)
 			if !chol.Factorize(c) {
-				return nil, nil, &CorrelationError{Pair: p, A: pr.A, B: pr.B, Rho: pr.Rho, Err: ErrNotPosDef}
+				e := ErrNotPosDef
+				if pearson {
+					e = ErrNoScores
+				}
+				return nil, nil, &CorrelationError{Pair: p, A: pr.A, B: pr.B, Rho: pr.Rho, Err: e}
 			}
 		}
 	}
@@ -68,10 +72,11 @@ func rearrange(x []float64, n, stride int, cols []int, target *mat.Cholesky, see
 		scores[i] = normalQuantile(float64(i+1) / float64(n+1))
 	}
 	r := make([]float64, n*k)
+	perm := make([]float64, n)
 	var src rand.ChaCha8
 	for j, col := range cols {
 		src.Seed(key(seed, purposeScores, uint64(col)))
-		perm := slices.Clone(scores)
+		copy(perm, scores)
 		for i := n - 1; i > 0; i-- { // Fisher–Yates
 			hi, _ := bits.Mul64(src.Uint64(), uint64(i+1))
 			perm[i], perm[hi] = perm[hi], perm[i]

@@ -38,9 +38,9 @@ type Pair struct {
 // correlation, match the request.
 //
 // Errors: a bad pair (index out of range, an input paired with itself, a
-// pair given twice, Rho not in (−1, 1)) or a target C or C′ that is not
-// positive definite is a *CorrelationError naming the pair; n ≤ m returns
-// ErrRealisations. Draw panics if dists is empty or n < 1.
+// pair given twice, Rho not in (−1, 1)) or a target C (ErrNotPosDef) or C′
+// (ErrNoScores) that is not positive definite is a *CorrelationError naming
+// the pair; n ≤ m returns ErrRealisations. Draw panics if dists is empty or n < 1.
 // Draw is serial and deterministic: the same arguments give the same
 // matrix on any machine with the same float64 arithmetic.
 func Draw(dists []Dist, pairs []Pair, n int, seed uint64) (*mat.Dense, error) {

@@ -141,6 +141,10 @@ func TestDrawErrors(t *testing.T) {
 		// (derived): with a = b = 0.6 alone it is 0.28 > 0; adding c = −0.6
 		// gives 1 − 0.432 − 1.08 = −0.512, so the third pair conflicts.
 		{"not positive definite", []Pair{{0, 1, 0.6}, {0, 2, 0.6}, {1, 2, -0.6}}, 100, ErrNotPosDef, 2},
+		// C with a, b, c = −0.31, 0.76, 0.37 has determinant +0.0151, but
+		// with each ρ replaced by 2·sin(πρ/6) the determinant is −0.046
+		// (derived, by the formula above): normal scores cannot reach it.
+		{"no normal scores", []Pair{{0, 1, -0.31}, {0, 2, 0.76}, {1, 2, 0.37}}, 100, ErrNoScores, 2},
 		{"too few realisations", []Pair{{0, 1, 0.2}, {1, 2, 0.1}}, 3, ErrRealisations, -1},
 	} {
 		t.Run(c.name, func(t *testing.T) {

@@ -20,17 +20,21 @@ var (
 	ErrDuplicate    = errors.New("chance: pair correlated twice")
 	ErrRho          = errors.New("chance: rank correlation not in (−1, 1)")
 	ErrNotPosDef    = errors.New("chance: correlation matrix not positive definite")
+	ErrNoScores     = errors.New("chance: rank correlations not reachable by normal scores (2·sin(πρ/6) matrix not positive definite)")
 	ErrRealisations = errors.New("chance: too few realisations for the correlated inputs")
 )
 
 // CorrelationError reports a bad entry of the correlation list given to
 // Draw. Pair is the 0-based position of the entry in the list; A and B are
 // its input indices, Rho its value, and Err one of ErrIndex, ErrSelf,
-// ErrDuplicate, ErrRho or ErrNotPosDef.
+// ErrDuplicate, ErrRho, ErrNotPosDef or ErrNoScores.
 //
 // For ErrNotPosDef the pairs are added to the identity one at a time in list
 // order and Pair is the first one whose addition leaves the matrix not
 // positive definite: the entry that conflicts with those before it.
+// ErrNoScores is the same test on the matrix of 2·sin(π·ρ/6), the normal-
+// score correlations Draw uses (see Draw); a few valid rank-correlation
+// matrices near the edge of positive definiteness fail it.
 type CorrelationError struct {
 	Pair int
 	A, B int

@@ -14,8 +14,8 @@ import (
 // −Inf entries (an undefined output ranked below every number) sort first
 // and count in n. Percentile returns NaN when the result is not finite (it
 // falls on or next to an infinite entry) and for an empty slice. It panics
-// if p is outside [0, 1] or sorted is not ascending; NaN entries are not
-// allowed.
+// if p is outside [0, 1] or sorted is not ascending (a NaN entry counts as
+// out of order).
 func Percentile(sorted []float64, p float64) float64 {
 	if !(p >= 0 && p <= 1) {
 		panic("chance: percentile probability outside [0, 1]")

@@ -103,3 +103,12 @@ func TestCDFInvertsQuantile(t *testing.T) {
 		})
 	}
 }
+
+func TestTruncateReplacesBounds(t *testing.T) {
+	d := must(NewNormal(0, 1))
+	twice := mustTrunc(t, mustTrunc(t, d, 0, 1), -1, 2)
+	once := mustTrunc(t, d, -1, 2)
+	if twice != once {
+		t.Errorf("second Truncate kept the first bounds: %+v vs %+v", twice, once)
+	}
+}
