@@ -14,13 +14,14 @@ import (
 // TunnelSeries is one plane or set along the alignment.
 type TunnelSeries struct {
 	Name     string
-	Slip     []float64 // far-field slip tendency at each station (NaN: undefined)
+	FS       []float64 // far-field factor of safety at each station, with the plane's own strength (NaN: undefined)
 	FarBad   []bool    // critical or opening in the far field
 	WallSlip []bool    // critical or opening somewhere on the wall
 }
 
 // TunnelProfile is the along-alignment chart: cover, σθ,max/UCS with the
-// spalling band, and the far-field slip tendency of each plane or set, with
+// spalling band, and the far-field factor of safety of each plane or set
+// (with its own strength, so one FS = 1 line serves every plane), with
 // the stretches shaded where a plane is critical in the far field (darker)
 // or slips at the wall (lighter).
 type TunnelProfile struct {
@@ -29,7 +30,6 @@ type TunnelProfile struct {
 	Chainage []float64
 	Cover    []float64
 	Ratio    []float64
-	Friction float64 // μ of the site, drawn as the slip tendency that fails a cohesionless plane
 	Series   []TunnelSeries
 }
 
@@ -132,20 +132,27 @@ func (t *TunnelProfile) Draw(c draw.Canvas) {
 
 	slip := plot.New()
 	axisStyle(slip)
-	slip.Y.Label.Text = "far-field slip tendency Ts"
+	slip.Y.Label.Text = "far-field factor of safety"
 	slip.X.Label.Text = "chainage (m)"
 	slip.X.Min, slip.X.Max, slip.Y.Min = lo, hi, 0
 	slip.Add(wallShade, farShade)
-	top := t.Friction * 1.15
-	for i, s := range t.Series {
-		ln, pts, err := plotter.NewLinePoints(xy(t.Chainage, s.Slip))
-		if err != nil {
-			continue
-		}
-		for _, v := range s.Slip {
+	top := 1.5
+	for _, s := range t.Series {
+		for _, v := range s.FS {
 			if !math.IsNaN(v) {
 				top = math.Max(top, v*1.1)
 			}
+		}
+	}
+	top = math.Min(top, fsCeiling) // larger factors of safety are drawn at the ceiling
+	for i, s := range t.Series {
+		fs := make([]float64, len(s.FS))
+		for k, v := range s.FS {
+			fs[k] = math.Min(v, top)
+		}
+		ln, pts, err := plotter.NewLinePoints(xy(t.Chainage, fs))
+		if err != nil {
+			continue
 		}
 		ln.LineStyle = draw.LineStyle{Color: ink, Width: vg.Points(1), Dashes: dashSet[i%len(dashSet)]}
 		pts.GlyphStyle = draw.GlyphStyle{Color: ink, Radius: vg.Points(1.6), Shape: shapeSet[i%len(shapeSet)]}
@@ -153,10 +160,10 @@ func (t *TunnelProfile) Draw(c draw.Canvas) {
 		slip.Legend.Add(s.Name, ln, pts)
 	}
 	slip.Y.Max = top * 1.6 // headroom for the key above the curves
-	mu := plotter.NewFunction(func(float64) float64 { return t.Friction })
-	mu.LineStyle = draw.LineStyle{Color: warning, Width: vg.Points(1), Dashes: []vg.Length{vg.Points(2), vg.Points(2)}}
-	slip.Add(mu)
-	slip.Legend.Add(fmt.Sprintf("μ = %.4g: a cohesionless plane slips above", t.Friction), mu)
+	one := plotter.NewFunction(func(float64) float64 { return 1 })
+	one.LineStyle = draw.LineStyle{Color: warning, Width: vg.Points(1), Dashes: []vg.Length{vg.Points(2), vg.Points(2)}}
+	slip.Add(one)
+	slip.Legend.Add("FS = 1: a plane slips below", one)
 	slip.Legend.Add("critical or opening in the far field", farShade)
 	slip.Legend.Add("slips or opens at the wall", wallShade)
 	slip.Legend.Top = true
@@ -169,6 +176,10 @@ func (t *TunnelProfile) Draw(c draw.Canvas) {
 		r[0].Draw(cs[i][0])
 	}
 }
+
+// fsCeiling is the largest factor of safety the profile chart shows; larger
+// ones are drawn at it.
+const fsCeiling = 4.0
 
 // bandFill shades the band lo ≤ y ≤ hi across the plot.
 type bandFill struct{ lo, hi float64 }

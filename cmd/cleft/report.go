@@ -157,8 +157,8 @@ func slopeReport(sc *slope.Screening, defaults []string) *report.Table {
 		t.Notes = append(t.Notes, "Defaults applied: "+strings.Join(defaults, "; ")+".")
 	}
 	t.Notes = append(t.Notes, "The feasible cases (every test, feasible or not, with the condition that failed, is in slope.csv):")
-	t.Columns = []string{"test", "planes", "mode", "line", "crack depth m"}
-	t.Numeric = []bool{false, false, false, true, true}
+	t.Columns = []string{"test", "planes", "mode", "line", "φ °", "crack depth m"}
+	t.Numeric = []bool{false, false, false, true, true, true}
 	for _, f := range sc.Slope.CrackFill {
 		t.Columns = append(t.Columns, fmt.Sprintf("FS, crack %g%% full", 100*f))
 		t.Numeric = append(t.Numeric, true)
@@ -173,7 +173,7 @@ func slopeReport(sc *slope.Screening, defaults []string) *report.Table {
 		if c.Test == slope.WedgeTest && c.HasLine {
 			line = fmt.Sprintf("%03.0f/%02.0f", c.Line.Trend, c.Line.Plunge)
 		}
-		row := []string{c.Test.String(), sc.Names(c), words.Reason(sc, c), line, words.Fixed(c.CrackDepth, 1)}
+		row := []string{c.Test.String(), sc.Names(c), words.Reason(sc, c), line, words.Fixed(c.Phi, 1), words.Fixed(c.CrackDepth, 1)}
 		for i := range sc.Slope.CrackFill {
 			v := math.NaN()
 			if i < len(c.FS) {

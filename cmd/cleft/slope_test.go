@@ -24,7 +24,7 @@ func TestSlopeCommand(t *testing.T) {
 	}
 	rows := readCSV(t, filepath.Join(out, "slope.csv"))
 	head := strings.Join(rows[0], ",")
-	if head != "test,planes,feasible,reason,line_trend,line_plunge,fs_crack_fill_0,fs_crack_fill_0.5,fs_crack_fill_1,crack_depth_m,water_depth_to_fail_m" {
+	if head != "test,planes,feasible,reason,line_trend,line_plunge,friction_angle_deg,fs_crack_fill_0,fs_crack_fill_0.5,fs_crack_fill_1,crack_depth_m,water_depth_to_fail_m" {
 		t.Errorf("header %s", head)
 	}
 	// 9 candidates (6 planes, 3 set means): 9 planar, 36 wedge, 9 toppling rows.

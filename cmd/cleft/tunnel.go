@@ -111,9 +111,8 @@ func tunnelTables(sc *tunnel.Screening) []namedTable {
 func tunnelFigures(s *site.Site, sc *tunnel.Screening, idx int) []*namedFigure {
 	t := sc.Tunnel
 	pr := &plots.TunnelProfile{
-		Site:     s.Name,
-		Lines:    []string{fmt.Sprintf("Along the alignment: chainage %g to %g m, radius %g m, UCS %g MPa", sc.Stations[0].Chainage, sc.Stations[len(sc.Stations)-1].Chainage, t.Radius, t.UCS), s.Summary()},
-		Friction: s.Criterion.Friction(),
+		Site:  s.Name,
+		Lines: []string{fmt.Sprintf("Along the alignment: chainage %g to %g m, radius %g m, UCS %g MPa", sc.Stations[0].Chainage, sc.Stations[len(sc.Stations)-1].Chainage, t.Radius, t.UCS), s.Summary()},
 	}
 	for _, ts := range sc.Stations {
 		pr.Chainage = append(pr.Chainage, ts.Chainage)
@@ -124,7 +123,7 @@ func tunnelFigures(s *site.Site, sc *tunnel.Screening, idx int) []*namedFigure {
 		se := plots.TunnelSeries{Name: tg.Name}
 		for _, ts := range sc.Stations {
 			r := ts.Rows[i]
-			se.Slip = append(se.Slip, r.Far.SlipTendency)
+			se.FS = append(se.FS, r.Far.FactorOfSafety)
 			se.FarBad = append(se.FarBad, r.Far.State != planes.Stable)
 			se.WallSlip = append(se.WallSlip, len(r.Critical) > 0 || len(r.Opening) > 0)
 		}
@@ -152,7 +151,7 @@ func tunnelFigures(s *site.Site, sc *tunnel.Screening, idx int) []*namedFigure {
 	return []*namedFigure{
 		{file: "tunnel-profile",
 			title:   "Along the tunnel alignment",
-			caption: "Top: cover above the crown. Middle: the largest tangential stress at the wall against the UCS, with the band of the onset of spalling, 0.4 ± 0.1 (Martin, Kaiser & McCreath 1999). Bottom: far-field slip tendency of each plane or set at the axis depth; the dotted red line is the site friction μ. Shading: stretches where a plane is critical or opening in the far field (darker) or slips or opens somewhere on the wall (lighter).",
+			caption: "Top: cover above the crown. Middle: the largest tangential stress at the wall against the UCS, with the band of the onset of spalling, 0.4 ± 0.1 (Martin, Kaiser & McCreath 1999). Bottom: far-field factor of safety of each plane or set at the axis depth, each with its own strength (values above 4 are drawn at 4); the dotted red line is FS = 1. Shading: stretches where a plane is critical or opening in the far field (darker) or slips or opens somewhere on the wall (lighter).",
 			fig:     pr, w: cm(19, 0), h: cm(17, 0)},
 		{file: "tunnel-wall",
 			title:   fmt.Sprintf("Wall of the opening at chainage %g m", ts.Chainage),

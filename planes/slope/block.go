@@ -15,7 +15,7 @@ import (
 type PlanarBlock struct {
 	Height     float64 // H, slope height (toe to crest)
 	FaceDip    float64 // ψf in the section
-	TopDip     float64 // ψs in the section, rising into the slope; 0 for a flat top
+	TopDip     float64 // ψs in the section, rising into the slope (negative: descending behind the crest); 0 for a flat top
 	PlaneDip   float64 // ψp
 	CrackDepth float64 // z, below the upper surface; 0 for no crack
 	UnitWeight float64 // γ of the rock
@@ -35,7 +35,9 @@ func CriticalCrackDepth(h, faceDip, planeDip float64) float64 {
 // NewPlanarBlock works out the block for a crack given by its depth z (when
 // byDepth) or its distance b behind the crest. The block is the polygon toe
 // → crest → top of the crack → foot of the crack → toe; with a flat top its
-// weight is Hoek & Bray's W = ½γH²{[1 − (z/H)²] cot ψp − cot ψf}. A crack
+// weight is Hoek & Bray's W = ½γH²{[1 − (z/H)²] cot ψp − cot ψf}. The upper
+// surface may rise into the slope or descend behind the crest (topDip < 0):
+// the polygon follows it either way, never flattened. A crack
 // placed where the plane has already reached the upper surface is no crack
 // (z = 0, the block ends where the plane outcrops).
 func NewPlanarBlock(h, faceDip, topDip, planeDip, crack float64, byDepth bool, gamma float64) (PlanarBlock, error) {
@@ -46,7 +48,7 @@ func NewPlanarBlock(h, faceDip, topDip, planeDip, crack float64, byDepth bool, g
 		return b, fmt.Errorf("slope height %v m: want > 0", h)
 	case !(planeDip > 0 && planeDip < faceDip):
 		return b, fmt.Errorf("plane dip %v° must be between 0 and the face dip %v° for planar sliding", planeDip, faceDip)
-	case !(topDip >= 0 && topDip < planeDip):
+	case !(topDip > -90 && topDip < planeDip):
 		return b, fmt.Errorf("upper surface dip %v° must be less than the plane dip %v° for the plane to outcrop behind the crest", topDip, planeDip)
 	}
 	xc := h / tf // crest

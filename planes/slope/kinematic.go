@@ -1,6 +1,8 @@
 package slope
 
 import (
+	"math"
+
 	"cleft/insitu/geom"
 	"cleft/planes"
 )
@@ -83,16 +85,23 @@ func PlanarSliding(p, f planes.Orientation, phi, lateral float64) Kinematic {
 	return k
 }
 
-// WedgeSliding tests the wedge of planes a and b on face f (Hoek & Bray
-// 1981): the line of intersection points out of the face (its trend within
-// 90° of the face's dip direction), daylights (plunges less than the face's
-// apparent dip along its trend) and plunges at least as steeply as phi. A
-// feasible wedge slides on one plane alone when that plane's dip direction
-// lies between the line's trend and the face's dip direction (Hoek & Bray
-// 1981; Wyllie & Mah 2004), else on both. It returns the line (towards the
+// WedgeSliding tests the wedge of planes a and b, of friction angles phiA
+// and phiB (degrees), on face f (Hoek & Bray 1981): the line of intersection
+// points out of the face (its trend within 90° of the face's dip direction),
+// daylights (plunges less than the face's apparent dip along its trend) and
+// plunges at least as steeply as the friction angle of the sliding. The wedge
+// slides on one plane alone when that plane's dip direction lies between the
+// line's trend and the face's dip direction (Hoek & Bray 1981; Wyllie & Mah
+// 2004), else on both. The friction angle tested is that of the plane it
+// slides on, and for sliding on both planes the smaller of the two: the
+// friction circle of the weaker plane is the cautious screen when the planes
+// differ (Wyllie & Mah 2004, ch. 7, memory; a both-plane wedge can slide
+// once the line is steeper than the weaker plane's friction angle only if
+// the stronger plane's share of the load is small, so this may flag wedges
+// that the factor of safety then clears). It returns the line (towards the
 // face when horizontal) and false in place of it for parallel planes.
-func WedgeSliding(a, b, f planes.Orientation, phi float64) (geom.Line, bool, Kinematic) {
-	k := Kinematic{Phi: phi, FaceDip: f.Dip()}
+func WedgeSliding(a, b, f planes.Orientation, phiA, phiB float64) (geom.Line, bool, Kinematic) {
+	k := Kinematic{Phi: math.Min(phiA, phiB), FaceDip: f.Dip()}
 	l, ok := Intersection(a, b)
 	if !ok {
 		k.Fails = Parallel
@@ -108,17 +117,18 @@ func WedgeSliding(a, b, f planes.Orientation, phi float64) (geom.Line, bool, Kin
 	if k.Offset >= 90 || !(l.Plunge < k.FaceApparent) {
 		k.Fails |= Daylight
 	}
-	if l.Plunge < phi {
+	mode := WedgeBoth
+	if between(a.DipDirection(), l.Trend, f.DipDirection()) {
+		mode, k.Phi = WedgeOnFirst, phiA
+	}
+	if between(b.DipDirection(), l.Trend, f.DipDirection()) {
+		mode, k.Phi = WedgeOnSecond, phiB
+	}
+	if l.Plunge < k.Phi {
 		k.Fails |= Friction
 	}
 	if k.Feasible = k.Fails == 0; k.Feasible {
-		k.Mode = WedgeBoth
-		if between(a.DipDirection(), l.Trend, f.DipDirection()) {
-			k.Mode = WedgeOnFirst
-		}
-		if between(b.DipDirection(), l.Trend, f.DipDirection()) {
-			k.Mode = WedgeOnSecond
-		}
+		k.Mode = mode
 	}
 	return l, true, k
 }
@@ -130,7 +140,26 @@ func WedgeSliding(a, b, f planes.Orientation, phi float64) (geom.Line, bool, Kin
 //	(90° − δ) + φ ≤ ψf
 //
 // so that slip between the layers can take place.
+//
+// A plane within NearVertical of vertical has no meaningful dip direction:
+// it is tested as dipping either way and passes if either passes, so that a
+// vertical joint typed as 90/030 or 90/210 gets one verdict.
 func FlexuralToppling(p, f planes.Orientation, phi, lateral float64) Kinematic {
+	k := toppling(p, f, phi, lateral)
+	if p.Dip() >= 90-NearVertical {
+		other := toppling(planes.MustNew(p.Dip(), geom.Azimuth(p.DipDirection()+180)), f, phi, lateral)
+		if other.Feasible || (!k.Feasible && other.Offset < k.Offset) {
+			k = other
+		}
+	}
+	return k
+}
+
+// NearVertical is the tolerance, degrees, within which a plane counts as
+// vertical where a test depends on which way it dips.
+const NearVertical = 1.0
+
+func toppling(p, f planes.Orientation, phi, lateral float64) Kinematic {
 	k := Kinematic{Phi: phi, Limit: lateral, Dip: p.Dip(), Trend: p.DipDirection(), FaceDip: f.Dip()}
 	k.Offset = azDiff(p.DipDirection(), f.DipDirection()+180)
 	k.ToppleSum = 90 - p.Dip() + phi

@@ -55,12 +55,13 @@ type Screening struct {
 	Cases      []Case
 }
 
-// Screen runs every test on every candidate and pair of candidates.
+// Screen runs every test on every candidate and pair of candidates. Each
+// test uses the friction angle of the plane(s) it concerns (Candidate.Phi;
+// see WedgeSliding for wedges); Kinematic.Phi says which.
 func Screen(sl Slope, cands []Candidate) *Screening {
 	sc := &Screening{Slope: sl, Candidates: cands}
-	phi := sl.FrictionAngle
 	for i, c := range cands {
-		k := PlanarSliding(c.Orientation, sl.Face, phi, sl.LateralLimit)
+		k := PlanarSliding(c.Orientation, sl.Face, c.Phi, sl.LateralLimit)
 		r := Case{Test: PlanarTest, A: i, B: -1, Kinematic: k, Line: c.Orientation.DipLine(), HasLine: true, CrackDepth: math.NaN(), WaterToFail: math.NaN()}
 		if k.Feasible {
 			r.planarFS(sl, c)
@@ -69,12 +70,12 @@ func Screen(sl Slope, cands []Candidate) *Screening {
 	}
 	for i, a := range cands {
 		for j := i + 1; j < len(cands); j++ {
-			l, ok, k := WedgeSliding(a.Orientation, cands[j].Orientation, sl.Face, phi)
+			l, ok, k := WedgeSliding(a.Orientation, cands[j].Orientation, sl.Face, a.Phi, cands[j].Phi)
 			sc.Cases = append(sc.Cases, Case{Test: WedgeTest, A: i, B: j, Kinematic: k, Line: l, HasLine: ok, CrackDepth: math.NaN(), WaterToFail: math.NaN()})
 		}
 	}
 	for i, c := range cands {
-		k := FlexuralToppling(c.Orientation, sl.Face, phi, sl.ToppleLimit)
+		k := FlexuralToppling(c.Orientation, sl.Face, c.Phi, sl.ToppleLimit)
 		sc.Cases = append(sc.Cases, Case{Test: TopplingTest, A: i, B: -1, Kinematic: k, Line: c.Orientation.DipLine(), HasLine: true, CrackDepth: math.NaN(), WaterToFail: math.NaN()})
 	}
 	return sc
@@ -89,7 +90,7 @@ func (r *Case) planarFS(sl Slope, c Candidate) {
 	if !sl.CrackGiven {
 		crack, byDepth = CriticalCrackDepth(sl.Height, psiF, c.Orientation.Dip()), true
 	}
-	b, err := NewPlanarBlock(sl.Height, psiF, math.Max(0, ApparentDip(sl.Top, dd)), c.Orientation.Dip(), crack, byDepth, sl.UnitWeight)
+	b, err := NewPlanarBlock(sl.Height, psiF, ApparentDip(sl.Top, dd), c.Orientation.Dip(), crack, byDepth, sl.UnitWeight)
 	if err != nil {
 		r.BlockErr = err
 		return

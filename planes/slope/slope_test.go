@@ -98,7 +98,7 @@ func TestWedgeSliding(t *testing.T) {
 		{"steeper than the face", planes.MustNew(80, 170), planes.MustNew(80, 250), NoMode, Daylight},
 		{"parallel", planes.MustNew(50, 200), planes.MustNew(50, 200), NoMode, Parallel},
 	} {
-		l, _, k := WedgeSliding(c.a, c.b, face, phi)
+		l, _, k := WedgeSliding(c.a, c.b, face, phi, phi)
 		if k.Mode != c.mode || k.Fails != c.fails || k.Feasible != (c.mode != NoMode) {
 			t.Errorf("%s: line %v, %+v", c.name, l, k)
 		}

@@ -13,7 +13,7 @@ import (
 
 // Slope is slope.csv: every test of every candidate and pair.
 func Slope(sc *slope.Screening) [][]string {
-	cols := []string{"test", "planes", "feasible", "reason", "line_trend", "line_plunge"}
+	cols := []string{"test", "planes", "feasible", "reason", "line_trend", "line_plunge", "friction_angle_deg"}
 	for _, f := range sc.Slope.CrackFill {
 		cols = append(cols, "fs_crack_fill_"+strconv.FormatFloat(f, 'g', -1, 64))
 	}
@@ -23,7 +23,7 @@ func Slope(sc *slope.Screening) [][]string {
 		if c.Feasible {
 			feasible = "yes"
 		}
-		row := []string{c.Test.String(), sc.Names(c), feasible, words.Reason(sc, c), "", ""}
+		row := []string{c.Test.String(), sc.Names(c), feasible, words.Reason(sc, c), "", "", Cell(c.Phi)}
 		if c.Test == slope.WedgeTest && c.HasLine {
 			row[4], row[5] = Cell(c.Line.Trend), Cell(c.Line.Plunge)
 		}
