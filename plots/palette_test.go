@@ -42,3 +42,17 @@ func ExampleRamp() {
 	// 0.5 #009592
 	// 1.0 #f4edc0
 }
+
+// BenchmarkRampAt times one colour of the ramp, over an even sweep of f.
+func BenchmarkRampAt(b *testing.B) {
+	var r Ramp
+	const n = 1000
+	var sink uint8
+	i := 0
+	for b.Loop() {
+		c := r.At(float64(i%(n+1)) / n)
+		sink += c.G
+		i++
+	}
+	_ = sink
+}
