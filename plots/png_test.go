@@ -2,6 +2,9 @@ package plots
 
 import (
 	"bytes"
+	"image"
+	"image/color"
+	"image/png"
 	"io"
 	"math"
 	"math/rand/v2"
@@ -11,6 +14,8 @@ import (
 
 	"gonum.org/v1/gonum/spatial/r3"
 	"gonum.org/v1/plot/vg"
+	"gonum.org/v1/plot/vg/draw"
+	"gonum.org/v1/plot/vg/vgimg"
 )
 
 // Figure sizes of the command line's defaults (cmd/cleft/plot.go).
@@ -80,5 +85,90 @@ func BenchmarkWritePNG(b *testing.B) {
 			}
 			b.ReportMetric(float64(buf.Len()), "bytes/png")
 		})
+	}
+}
+
+// pngBefore writes f as Write did before pngEncoder: through
+// vgimg.PngCanvas, at the default compression level.
+func pngBefore(f Figure, w, h vg.Length, out io.Writer) error {
+	c := vgimg.PngCanvas{Canvas: vgimg.NewWith(vgimg.UseWH(w, h), vgimg.UseDPI(PNGDPI), vgimg.UseBackgroundColor(color.White))}
+	f.Draw(draw.New(c))
+	_, err := c.WriteTo(out)
+	return err
+}
+
+func decodePNG(t *testing.T, b []byte) image.Image {
+	t.Helper()
+	img, err := png.Decode(bytes.NewReader(b))
+	if err != nil {
+		t.Fatal(err)
+	}
+	return img
+}
+
+func TestWritePNGSamePixels(t *testing.T) {
+	// The faster encoder changes the compression only: every figure decodes
+	// (image/png) to the same pixels as through vgimg.PngCanvas.
+	figs := []struct {
+		name string
+		f    Figure
+	}{{"stereonet", demoStereonet()}, {"density", demoDensity()}, {"mohr", demoMohr()}}
+	for _, fg := range figs {
+		t.Run(fg.name, func(t *testing.T) {
+			var before, after bytes.Buffer
+			if err := pngBefore(fg.f, benchW, benchH, &before); err != nil {
+				t.Fatal(err)
+			}
+			if err := Write(fg.f, benchW, benchH, "png", &after); err != nil {
+				t.Fatal(err)
+			}
+			a, b := decodePNG(t, before.Bytes()), decodePNG(t, after.Bytes())
+			if a.Bounds() != b.Bounds() {
+				t.Fatalf("bounds %v, before %v", b.Bounds(), a.Bounds())
+			}
+			r := a.Bounds()
+			if r.Dx() != int(math.Round(float64(benchW/vg.Inch)*PNGDPI)) {
+				t.Errorf("width %d px, want %v in at %d dpi", r.Dx(), benchW/vg.Inch, PNGDPI)
+			}
+			differ := 0
+			for y := r.Min.Y; y < r.Max.Y; y++ {
+				for x := r.Min.X; x < r.Max.X; x++ {
+					if color.NRGBA64Model.Convert(a.At(x, y)) != color.NRGBA64Model.Convert(b.At(x, y)) {
+						differ++
+					}
+				}
+			}
+			if differ > 0 {
+				t.Errorf("%d of %d pixels differ", differ, r.Dx()*r.Dy())
+			}
+			t.Logf("%d bytes, before %d", after.Len(), before.Len())
+		})
+	}
+}
+
+// BenchmarkEncodePNG times the encoding alone of a drawn figure: "before"
+// is vgimg.PngCanvas (default compression), "after" writePNG.
+func BenchmarkEncodePNG(b *testing.B) {
+	for _, fg := range benchFigures(b) {
+		c := vgimg.NewWith(vgimg.UseWH(benchW, benchH), vgimg.UseDPI(PNGDPI), vgimg.UseBackgroundColor(color.White))
+		fg.f.Draw(draw.New(c))
+		for _, enc := range []struct {
+			name  string
+			write func(io.Writer) error
+		}{
+			{"before", func(w io.Writer) error { _, err := (vgimg.PngCanvas{Canvas: c}).WriteTo(w); return err }},
+			{"after", func(w io.Writer) error { return writePNG(w, c.Image()) }},
+		} {
+			b.Run(fg.name+"/"+enc.name, func(b *testing.B) {
+				var buf bytes.Buffer
+				for b.Loop() {
+					buf.Reset()
+					if err := enc.write(&buf); err != nil {
+						b.Fatal(err)
+					}
+				}
+				b.ReportMetric(float64(buf.Len()), "bytes/png")
+			})
+		}
 	}
 }
