@@ -38,12 +38,15 @@ func FormatOf(path string) (string, error) {
 const PNGDPI = 150
 
 // Write draws f on a w × h canvas and writes it to out in format ("png",
-// "svg" or "pdf"). PNGs have a white background at PNGDPI.
+// "svg" or "pdf"). PNGs have a white background at PNGDPI and are compressed
+// at deflate's fastest level (pngEncoder).
 func Write(f Figure, w, h vg.Length, format string, out io.Writer) error {
 	var c vg.CanvasWriterTo
 	switch format {
 	case "png":
-		c = vgimg.PngCanvas{Canvas: vgimg.NewWith(vgimg.UseWH(w, h), vgimg.UseDPI(PNGDPI), vgimg.UseBackgroundColor(color.White))}
+		img := vgimg.NewWith(vgimg.UseWH(w, h), vgimg.UseDPI(PNGDPI), vgimg.UseBackgroundColor(color.White))
+		f.Draw(draw.New(img))
+		return writePNG(out, img.Image())
 	case "svg":
 		c = vgsvg.New(w, h)
 	case "pdf":
@@ -52,10 +55,8 @@ func Write(f Figure, w, h vg.Length, format string, out io.Writer) error {
 		return fmt.Errorf("plots: unknown format %q", format)
 	}
 	dc := draw.New(c)
-	if format != "png" {
-		dc.SetColor(color.White)
-		dc.Fill(dc.Rectangle.Path())
-	}
+	dc.SetColor(color.White)
+	dc.Fill(dc.Rectangle.Path())
 	f.Draw(dc)
 	_, err := c.WriteTo(out)
 	return err

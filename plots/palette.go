@@ -22,9 +22,34 @@ const (
 	rampC          = 0.13
 )
 
-// At returns the colour at fraction f.
+// At returns the colour at fraction f ∈ [0, 1]; f is clamped, and NaN gives
+// the colour at 0. It interpolates linearly, channel by channel, in a table
+// of the exact ramp (rampExact) at rampSteps+1 even steps of f, built on
+// first use: every channel is within 1 of the exact ramp rounded to 8 bits
+// (tested on a dense sweep), and equal to it at the table's nodes. At does
+// not allocate.
 func (Ramp) At(f float64) color.NRGBA {
-	f = math.Max(0, math.Min(1, f))
+	t := rampTable()
+	x := f * rampSteps
+	if !(x > 0) { // negative or NaN
+		x = 0
+	}
+	x = min(x, rampSteps)
+	i := min(int(x), rampSteps-1)
+	w := x - float64(i) // ∈ [0, 1]
+	a, b := &t[i], &t[i+1]
+	// Rounding by +0.5 and truncation: the channels are ≥ 0.
+	return color.NRGBA{
+		R: uint8(a[0] + (b[0]-a[0])*w + 0.5),
+		G: uint8(a[1] + (b[1]-a[1])*w + 0.5),
+		B: uint8(a[2] + (b[2]-a[2])*w + 0.5),
+		A: 255,
+	}
+}
+
+// rampExact returns the exact colour of the ramp at fraction f ∈ [0, 1] as
+// sRGB channels scaled to [0, 255], not rounded.
+func rampExact(f float64) [3]float64 {
 	l := rampL0 + (rampL1-rampL0)*f
 	h := (rampH0 + (rampH1-rampH0)*f) * math.Pi / 180
 	// Chroma: full in the middle, less at the dark and light ends, then
@@ -43,12 +68,13 @@ func (Ramp) At(f float64) color.NRGBA {
 		c = lo
 	}
 	rgb, _ := oklchToSRGB(l, c, h)
-	return color.NRGBA{R: rgb[0], G: rgb[1], B: rgb[2], A: 255}
+	return rgb
 }
 
-// oklchToSRGB converts OKLCh to 8-bit sRGB; ok is false when the colour lies
-// outside the sRGB gamut.
-func oklchToSRGB(l, c, h float64) ([3]uint8, bool) {
+// oklchToSRGB converts OKLCh to sRGB channels scaled to [0, 255] (clipped to
+// that range, not rounded); ok is false when the colour lies outside the sRGB
+// gamut.
+func oklchToSRGB(l, c, h float64) ([3]float64, bool) {
 	a, b := c*math.Cos(h), c*math.Sin(h)
 	// OKLab → LMS' → LMS → linear sRGB (Ottosson 2020).
 	l_ := l + 0.3963377774*a + 0.2158037573*b
@@ -60,7 +86,7 @@ func oklchToSRGB(l, c, h float64) ([3]uint8, bool) {
 		-1.2684380046*L + 2.6097574011*M - 0.3413193965*S,
 		-0.0041960863*L - 0.7034186147*M + 1.7076147010*S,
 	}
-	var out [3]uint8
+	var out [3]float64
 	ok := true
 	for i, v := range lin {
 		if v < -1e-9 || v > 1+1e-9 {
@@ -72,7 +98,7 @@ func oklchToSRGB(l, c, h float64) ([3]uint8, bool) {
 		} else {
 			v = 1.055*math.Pow(v, 1/2.4) - 0.055
 		}
-		out[i] = uint8(math.Round(v * 255))
+		out[i] = v * 255
 	}
 	return out, ok
 }
