@@ -32,6 +32,7 @@ func demoStereonet() *Stereonet {
 	for i, o := range []planes.Orientation{planes.MustNew(80, 10), planes.MustNew(40, 200), planes.MustNew(88, 350), planes.MustNew(10, 30), planes.MustNew(65, 128)} {
 		st.Poles = append(st.Poles, Pole{Name: o.String(), Orientation: o, Result: planes.Resolve(s, o, c), Trace: i%2 == 0})
 	}
+	st.Field = NewField(s, c, SlipTendency, EqualArea, FieldSize(19*vg.Centimeter, 13.5*vg.Centimeter))
 	return st
 }
 
@@ -50,6 +51,7 @@ func demoDensity() *DensityNet {
 		d.Poles = append(d.Poles, p)
 		d.InSet = append(d.InSet, math.Abs(r3.Dot(p, m)) > 0.97)
 	}
+	d.Field, d.Kamb = NewDensityField(EqualArea, d.Poles, nil, FieldSize(19*vg.Centimeter, 13.5*vg.Centimeter))
 	return d
 }
 

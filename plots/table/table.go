@@ -7,7 +7,6 @@ package table
 import (
 	"fmt"
 	"math"
-	"strconv"
 	"unicode/utf8"
 
 	"cleft/planes"
@@ -157,14 +156,14 @@ func appendNumber(b []byte, v float64) []byte {
 	if math.IsNaN(v) || math.IsInf(v, 0) {
 		return b
 	}
-	return strconv.AppendFloat(b, v+0, 'g', 8, 64) // +0 turns −0 into 0
+	return AppendSig8(b, v+0) // +0 turns −0 into 0
 }
 
 func appendJSONNumber(b []byte, v float64) []byte {
 	if math.IsNaN(v) || math.IsInf(v, 0) {
 		return append(b, "null"...)
 	}
-	return strconv.AppendFloat(b, v+0, 'g', 8, 64)
+	return AppendSig8(b, v+0)
 }
 
 // appendCSV writes s as a CSV field, quoted when it must be (RFC 4180).
