@@ -24,6 +24,12 @@ type Orientation struct {
 	updip  r3.Vec // unit, in the plane, pointing up the dip
 }
 
+// NearVertical is the tolerance, degrees, within which a plane counts as
+// vertical wherever a verdict would otherwise depend on which of its two
+// dip directions was typed (this tool's choice: 1°, well inside the
+// accuracy of a compass reading).
+const NearVertical = 1.0
+
 // The vectors of the zero value, the plane 0/000.
 var (
 	zeroPole   = r3.Vec{Z: 1}

@@ -19,7 +19,7 @@ type TunnelSeries struct {
 	WallSlip []bool    // critical or opening somewhere on the wall
 }
 
-// TunnelProfile is the along-alignment chart: cover, σθ,max/UCS with the
+// TunnelProfile is the along-alignment chart: cover, σmax/UCS with the
 // spalling band, and the far-field factor of safety of each plane or set
 // (with its own strength, so one FS = 1 line serves every plane), with
 // the stretches shaded where a plane is critical in the far field (darker)

@@ -40,7 +40,7 @@ resolved on each plane: the arcs where it is critically stressed or opening.
 Perimeter angles are degrees from the crown, clockwise looking along the drive
 (0 crown, 90 right sidewall, 180 invert, 270 left sidewall). With --out:
 stations.csv, wall.csv, profile.csv, an along-alignment chart and a perimeter
-plot of one station (--station; default the one with the largest σθ/UCS).
+plot of one station (--station; default the one with the largest σmax/UCS).
 
 ` + caution,
 		Args: oneSite,

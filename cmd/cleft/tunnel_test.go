@@ -20,7 +20,7 @@ func TestTunnelCommand(t *testing.T) {
 	if code != 0 {
 		t.Fatalf("exit %d: %s", code, stderr)
 	}
-	for _, want := range []string{"57 stations every 25 m", "Largest tangential stress", "Martin, Kaiser & McCreath", "S1 (78/141)", "F1 (74/188)"} {
+	for _, want := range []string{"57 stations every 25 m", "Largest boundary stress", "Martin, Kaiser & McCreath", "S1 (78/141)", "F1 (74/188)"} {
 		if !strings.Contains(stdout, want) {
 			t.Errorf("summary lacks %q:\n%s", want, stdout)
 		}

@@ -29,10 +29,10 @@ func ExampleNew() {
 		panic(err)
 	}
 	w := tn.Stations[tn.Worst()]
-	fmt.Printf("tunnel: %d stations, largest σθ/UCS %.2f at %g m\n", len(tn.Stations), w.Ratio, w.Chainage)
+	fmt.Printf("tunnel: %d stations, largest σmax/UCS %.2f at %g m\n", len(tn.Stations), w.Ratio, w.Chainage)
 	// Output:
 	// 139 planes and readings: 1 critical, 1 opening; least stable F2
 	// 3 sets from 133 readings
 	// slope: 1 planar, 2 wedge, 1 toppling cases feasible
-	// tunnel: 57 stations, largest σθ/UCS 0.33 at 900 m
+	// tunnel: 57 stations, largest σmax/UCS 0.33 at 575 m
 }

@@ -141,12 +141,12 @@ func WedgeSliding(a, b, f planes.Orientation, phiA, phiB float64) (geom.Line, bo
 //
 // so that slip between the layers can take place.
 //
-// A plane within NearVertical of vertical has no meaningful dip direction:
+// A plane within planes.NearVertical of vertical has no meaningful dip direction:
 // it is tested as dipping either way and passes if either passes, so that a
 // vertical joint typed as 90/030 or 90/210 gets one verdict.
 func FlexuralToppling(p, f planes.Orientation, phi, lateral float64) Kinematic {
 	k := toppling(p, f, phi, lateral)
-	if p.Dip() >= 90-NearVertical {
+	if p.Dip() >= 90-planes.NearVertical {
 		other := toppling(planes.MustNew(p.Dip(), geom.Azimuth(p.DipDirection()+180)), f, phi, lateral)
 		if other.Feasible || (!k.Feasible && other.Offset < k.Offset) {
 			k = other
@@ -154,10 +154,6 @@ func FlexuralToppling(p, f planes.Orientation, phi, lateral float64) Kinematic {
 	}
 	return k
 }
-
-// NearVertical is the tolerance, degrees, within which a plane counts as
-// vertical where a test depends on which way it dips.
-const NearVertical = 1.0
 
 func toppling(p, f planes.Orientation, phi, lateral float64) Kinematic {
 	k := Kinematic{Phi: phi, Limit: lateral, Dip: p.Dip(), Trend: p.DipDirection(), FaceDip: f.Dip()}

@@ -88,39 +88,54 @@ type DriveClass struct {
 }
 
 // ClassifyDrive rates plane o against a drive along the azimuth trend.
+// Where the table's choice is undefined it takes the less favourable class:
+// at exactly 45° strike-to-axis both bands apply, and a plane within
+// planes.NearVertical of vertical is neither with nor against its dip (so
+// it gets one class whichever dip direction was typed).
 func ClassifyDrive(o planes.Orientation, trend float64) DriveClass {
 	d := math.Abs(math.Remainder(o.Strike()-trend, 360))
 	if d > 90 {
 		d = 180 - d
 	}
-	c := DriveClass{StrikeToAxis: d}
 	if o.Dip() < 20 {
-		c.Class, c.Band = Fair, Flat
-		return c
+		return DriveClass{StrikeToAxis: d, Class: Fair, Band: Flat}
 	}
 	steep := o.Dip() >= 45
-	if d < 45 {
+	var cands []DriveClass
+	if d <= 45 {
+		c := DriveClass{StrikeToAxis: d, Class: Fair, Band: ParallelModerate}
 		if steep {
 			c.Class, c.Band = VeryUnfavourable, ParallelSteep
-		} else {
-			c.Class, c.Band = Fair, ParallelModerate
 		}
-		return c
+		cands = append(cands, c)
 	}
-	c.Band = PerpendicularModerate
-	if steep {
-		c.Band = PerpendicularSteep
+	if d >= 45 {
+		band := PerpendicularModerate
+		if steep {
+			band = PerpendicularSteep
+		}
+		_, cos := geom.SinCosDeg(trend - o.DipDirection())
+		vertical := o.Dip() >= 90-planes.NearVertical
+		if cos > 0 || vertical {
+			c := DriveClass{StrikeToAxis: d, Drive: WithDip, Class: Favourable, Band: band}
+			if steep {
+				c.Class = VeryFavourable
+			}
+			cands = append(cands, c)
+		}
+		if cos <= 0 || vertical {
+			c := DriveClass{StrikeToAxis: d, Drive: AgainstDip, Class: Unfavourable, Band: band}
+			if steep {
+				c.Class = Fair
+			}
+			cands = append(cands, c)
+		}
 	}
-	_, cos := geom.SinCosDeg(trend - o.DipDirection())
-	switch with := cos > 0; {
-	case with && steep:
-		c.Drive, c.Class = WithDip, VeryFavourable
-	case with:
-		c.Drive, c.Class = WithDip, Favourable
-	case steep:
-		c.Drive, c.Class = AgainstDip, Fair
-	default:
-		c.Drive, c.Class = AgainstDip, Unfavourable
+	worst := cands[0]
+	for _, c := range cands[1:] {
+		if c.Class > worst.Class {
+			worst = c
+		}
 	}
-	return c
+	return worst
 }

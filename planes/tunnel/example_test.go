@@ -28,12 +28,12 @@ func ExampleScreen() {
 	}
 	for _, st := range sc.Stations {
 		r := st.Rows[0]
-		fmt.Printf("%3.0f m: σθ,max/UCS %.2f, J1 %s FS %.2f, critical on the wall at %v\n", st.Chainage, st.Ratio, r.Drive.Class, r.Far.FactorOfSafety, r.Critical)
+		fmt.Printf("%3.0f m: σmax/UCS %.2f, J1 %s FS %.2f, critical on the wall at %v\n", st.Chainage, st.Ratio, r.Drive.Class, r.Far.FactorOfSafety, r.Critical)
 	}
 	// Output:
-	// 0 m: σθ,max/UCS 0.07, J1 fair FS 1.56, critical on the wall at [{160 190} {340 10}]
-	// 100 m: σθ,max/UCS 0.10, J1 fair FS 1.48, critical on the wall at [{160 190} {340 10}]
-	// 200 m: σθ,max/UCS 0.14, J1 fair FS 1.45, critical on the wall at [{160 190} {340 10}]
-	// 300 m: σθ,max/UCS 0.18, J1 fair FS 1.42, critical on the wall at [{160 190} {340 10}]
-	// 400 m: σθ,max/UCS 0.22, J1 fair FS 1.41, critical on the wall at [{160 190} {340 10}]
+	// 0 m: σmax/UCS 0.08, J1 fair FS 1.56, critical on the wall at [{160 190} {340 10}]
+	// 100 m: σmax/UCS 0.12, J1 fair FS 1.48, critical on the wall at [{160 190} {340 10}]
+	// 200 m: σmax/UCS 0.16, J1 fair FS 1.45, critical on the wall at [{160 190} {340 10}]
+	// 300 m: σmax/UCS 0.20, J1 fair FS 1.42, critical on the wall at [{160 190} {340 10}]
+	// 400 m: σmax/UCS 0.24, J1 fair FS 1.41, critical on the wall at [{160 190} {340 10}]
 }

@@ -38,11 +38,18 @@ type Result struct {
 	Station
 	State  insitu.State         // the far field at the axis depth
 	Wall   []opening.WallStress // at 0, PerimeterStep, … degrees
-	MaxAt  int                  // index in Wall of the largest σθ
-	MinAt  int                  // index in Wall of the smallest σθ
-	Ratio  float64              // σθ,max / UCS
-	WallPp float64              // pore pressure at the wall, MPa
-	Rows   []Row                // one per target
+	// ThetaMax and ThetaMin are the exact extremes of σθ round the wall
+	// (closed form, opening.MaxTangential; the least is 180° − … away by
+	// symmetry); WallMax is the largest principal stress in the plane of the
+	// wall, σθ with σz and τθz (opening.MaxWallPrincipal), found by root
+	// search. Angles in [0, 180): the same values recur 180° on.
+	ThetaMax, ThetaMin, WallMax opening.Peak
+	// Ratio is WallMax / UCS: spalling is judged on the largest boundary
+	// stress (Martin, Kaiser & McCreath 1999 used the largest boundary
+	// stress; in their plane cases it is σθ,max, as τθz = 0).
+	Ratio  float64
+	WallPp float64 // pore pressure at the wall, MPa
+	Rows   []Row   // one per target
 }
 
 // Screening is the tunnel screened station by station.
@@ -74,14 +81,11 @@ func Screen(t Tunnel, m insitu.Model, targets []Target) (*Screening, error) {
 			w := opening.Wall(far, th, t.Poisson)
 			res.Wall = append(res.Wall, w)
 			walls[k] = insitu.NewState(w.WallTensor(up, right, along, th), st.Depth, res.WallPp, res.State.Biot)
-			if w.Theta > res.Wall[res.MaxAt].Theta {
-				res.MaxAt = k
-			}
-			if w.Theta < res.Wall[res.MinAt].Theta {
-				res.MinAt = k
-			}
 		}
-		res.Ratio = res.Wall[res.MaxAt].Theta / t.UCS
+		res.ThetaMax = opening.MaxTangential(far, 0)
+		res.ThetaMin = opening.Peak{Stress: 2*(far.NN+far.EE) - res.ThetaMax.Stress, Theta: math.Mod(res.ThetaMax.Theta+90, 180)}
+		res.WallMax = opening.MaxWallPrincipal(far, t.Poisson, 0)
+		res.Ratio = res.WallMax.Stress / t.UCS
 		for _, tg := range targets {
 			row := Row{Drive: ClassifyDrive(tg.Orientation, st.Trend)}
 			s := res.State
@@ -103,7 +107,7 @@ func Screen(t Tunnel, m insitu.Model, targets []Target) (*Screening, error) {
 	return sc, nil
 }
 
-// Worst returns the index of the station with the largest σθ,max/UCS.
+// Worst returns the index of the station with the largest Ratio.
 func (sc *Screening) Worst() int {
 	w := 0
 	for i, st := range sc.Stations {

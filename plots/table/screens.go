@@ -70,11 +70,11 @@ func Wall(sc *tunnel.Screening) [][]string {
 // Profile is profile.csv: one row per station.
 func Profile(sc *tunnel.Screening) [][]string {
 	rows := [][]string{{"chainage", "trend", "plunge", "cover_m", "depth_m", "pore_pressure_mpa", "sigma_theta_max_mpa", "sigma_theta_max_at_deg",
-		"sigma_theta_min_mpa", "sigma_theta_min_at_deg", "sigma_theta_max_to_ucs", "spalling"}}
+		"sigma_theta_min_mpa", "sigma_theta_min_at_deg", "sigma_max_mpa", "sigma_max_at_deg", "sigma_max_to_ucs", "spalling"}}
 	for _, st := range sc.Stations {
 		rows = append(rows, []string{Cell(st.Chainage), Cell(st.Trend), Cell(st.Plunge), Cell(st.Cover), Cell(st.Depth), Cell(st.State.PorePressure),
-			Cell(st.Wall[st.MaxAt].Theta), fmt.Sprint(st.MaxAt * tunnel.PerimeterStep), Cell(st.Wall[st.MinAt].Theta), fmt.Sprint(st.MinAt * tunnel.PerimeterStep),
-			Cell(st.Ratio), words.Spalling(opening.SpallingOf(st.Ratio))})
+			Cell(st.ThetaMax.Stress), Cell(st.ThetaMax.Theta), Cell(st.ThetaMin.Stress), Cell(st.ThetaMin.Theta),
+			Cell(st.WallMax.Stress), Cell(st.WallMax.Theta), Cell(st.Ratio), words.Spalling(opening.SpallingOf(st.Ratio))})
 	}
 	return rows
 }

@@ -66,10 +66,10 @@ func TunnelLines(sc *tunnel.Screening) []string {
 	out := []string{fmt.Sprintf("Tunnel: chainage %g to %g m, %d stations every %g m, radius %g m, UCS %g MPa, wall %s.",
 		first.Chainage, last.Chainage, len(sc.Stations), t.Spacing, t.Radius, t.UCS, wall)}
 	w := sc.Stations[sc.Worst()]
-	l := fmt.Sprintf("Largest tangential stress %.1f MPa at %g m (cover %.0f m), %d° from the crown: σθ/UCS = %.2f, %s (Martin, Kaiser & McCreath 1999).",
-		w.Wall[w.MaxAt].Theta, w.Chainage, w.Cover, w.MaxAt*tunnel.PerimeterStep, w.Ratio, Spalling(opening.SpallingOf(w.Ratio)))
+	l := fmt.Sprintf("Largest boundary stress %.1f MPa at %g m (cover %.0f m), %s: σmax/UCS = %.2f, %s (Martin, Kaiser & McCreath 1999); the tangential stress alone peaks at %.1f MPa.",
+		w.WallMax.Stress, w.Chainage, w.Cover, WallAngles(w.WallMax.Theta), w.Ratio, Spalling(opening.SpallingOf(w.Ratio)), w.ThetaMax.Stress)
 	if sp := sc.Stretches(func(r *tunnel.Result) bool { return r.Ratio >= opening.SpallingOnset-0.1 }); len(sp) > 0 {
-		l += fmt.Sprintf(" σθ/UCS ≥ 0.3 at %s m.", Stretches(sp))
+		l += fmt.Sprintf(" σmax/UCS ≥ 0.3 at %s m.", Stretches(sp))
 	}
 	out = append(out, l)
 	for i, tg := range sc.Targets {
@@ -96,4 +96,10 @@ func TunnelLines(sc *tunnel.Screening) []string {
 		out = append(out, line+".")
 	}
 	return out
+}
+
+// WallAngles names a wall angle θ ∈ [0, 180) and its twin θ + 180 where
+// the same stress recurs: "at 45° and 225° from the crown".
+func WallAngles(theta float64) string {
+	return fmt.Sprintf("at %.0f° and %.0f° from the crown", theta, theta+180)
 }
