@@ -36,8 +36,8 @@ type Row struct {
 // Result is the screening at one station.
 type Result struct {
 	Station
-	State  insitu.State         // the far field at the axis depth
-	Wall   []opening.WallStress // at 0, PerimeterStep, … degrees
+	State insitu.State         // the far field at the axis depth
+	Wall  []opening.WallStress // at 0, PerimeterStep, … degrees
 	// ThetaMax and ThetaMin are the exact extremes of σθ round the wall
 	// (closed form, opening.MaxTangential; the least is 180° − … away by
 	// symmetry); WallMax is the largest principal stress in the plane of the
