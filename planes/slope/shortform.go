@@ -43,7 +43,7 @@ func WedgeShortForm(a, b, f planes.Orientation) (ShortForm, bool) {
 	lv := l.Vec()
 	s.PlungeI = l.Plunge
 	hz := r3.Unit(r3.Cross(lv, r3.Vec{Z: 1})) // horizontal, across the line
-	up := r3.Unit(r3.Cross(hz, lv))            // in the section, upwards
+	up := r3.Unit(r3.Cross(hz, lv))           // in the section, upwards
 	if up.Z > 0 {
 		up = r3.Scale(-1, up)
 	}

@@ -209,7 +209,7 @@ func TestWedgeGeometry(t *testing.T) {
 			continue
 		}
 		k := wc.crackOut
-		d := r3.Dot(k, pa) + 2 // pa on the crest
+		d := r3.Dot(k, pa) + 2        // pa on the crest
 		at := func(q r3.Vec) r3.Vec { // on the edge from q to pc
 			s := (d - r3.Dot(k, q)) / r3.Dot(k, r3.Sub(pc, q))
 			return r3.Add(q, r3.Scale(s, r3.Sub(pc, q)))
@@ -247,7 +247,9 @@ func TestWedgeWaterShortForm(t *testing.T) {
 	sl := wedgeSlope()
 	face, top := sl.Face, sl.Top
 	checked := 0
-	ang := func(u, v r3.Vec) float64 { return math.Acos(math.Max(-1, math.Min(1, math.Abs(r3.Dot(r3.Unit(u), r3.Unit(v)))))) }
+	ang := func(u, v r3.Vec) float64 {
+		return math.Acos(math.Max(-1, math.Min(1, math.Abs(r3.Dot(r3.Unit(u), r3.Unit(v))))))
+	}
 	for i, p := range randomWedges(t, sl, 17, 200, WedgeBoth) {
 		a, b := p[0], p[1]
 		na, nb := a.Normal(), b.Normal()
