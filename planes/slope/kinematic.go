@@ -35,7 +35,7 @@ const (
 	WedgeOnFirst              // a wedge sliding on its first plane alone
 	WedgeOnSecond             // a wedge sliding on its second plane alone
 	Flexural                  // flexural toppling
-	LiftOff                   // a wedge pushed off both planes (by water or loads)
+	LiftOff                   // a wedge off both planes: both overhang it (it falls), or water or loads push it off
 )
 
 // String returns the mode's token in the tables: planar, both-planes,
@@ -80,6 +80,7 @@ type Kinematic struct {
 	// on one); PlanView is the mode by the plan-view rule, reported beside
 	// the mechanics (see WedgeSliding), NoMode for other tests.
 	SlideDip float64
+	Sliding  Mode // wedges: the mode by the mechanics, feasible or not
 	PlanView Mode
 }
 
@@ -160,14 +161,14 @@ func WedgeSliding(a, b, f planes.Orientation, phiA, phiB float64) (geom.Line, bo
 		k.PlanView = WedgeOnSecond
 	}
 	mode := WeightMode(a, b, f)
-	k.SlideDip = l.Plunge
+	k.Sliding, k.SlideDip = mode, l.Plunge
 	switch mode {
 	case WedgeOnFirst:
 		k.Phi, k.SlideDip = phiA, a.Dip()
 	case WedgeOnSecond:
 		k.Phi, k.SlideDip = phiB, b.Dip()
 	}
-	if k.SlideDip < k.Phi {
+	if k.SlideDip < k.Phi && mode != LiftOff { // a block both planes overhang falls
 		k.Fails |= Friction
 	}
 	if k.Feasible = k.Fails == 0; k.Feasible {

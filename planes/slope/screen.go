@@ -145,16 +145,18 @@ func (r *Case) wedgeFS(sl Slope, a, b Candidate) {
 	}
 	r.Wedge = &w
 	st := Strength{PhiA: a.Phi, PhiB: b.Phi, CA: a.Cohesion, CB: b.Cohesion}
+	ld := sl.Load
+	ld.Bolt = sl.WedgeBolt
 	worst, wi := math.Inf(1), 0
 	for i, wc := range sl.Water {
 		h := wc.Head(w.PeakElevation(), w.CrestElevation(), w.Saturated)
-		res := w.Solve(st, h, sl.Load)
+		res := w.Solve(st, h, ld)
 		r.Heads, r.FS, r.Modes = append(r.Heads, h), append(r.FS, res.FS), append(r.Modes, res.Mode)
 		if res.FS < worst {
 			worst, wi = res.FS, i
 		}
 	}
-	r.BoltToTarget, _ = w.BoltFor(st, r.Heads[wi], sl.Load, sl.TargetFS)
+	r.BoltToTarget, _ = w.BoltFor(st, r.Heads[wi], ld, sl.TargetFS)
 }
 
 // Feasible returns the number of feasible cases of each test.

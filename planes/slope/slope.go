@@ -16,7 +16,8 @@ type Slope struct {
 	CrackByDepth  bool
 	CrackGiven    bool    // false: Hoek & Bray's critical depth for each planar block, no crack in a wedge
 	Cohesion      float64 // c of planes without their own cohesion, MPa ≥ 0
-	Load          Load    // bolt and seismic load on every block (Bolt per metre on planar blocks, per wedge on wedges)
+	Load          Load    // bolt (Bolt: MN per metre on planar blocks) and seismic load on every block
+	WedgeBolt     float64 // the bolt force on each wedge, MN, in the direction of Load
 	TargetFS      float64 // the factor of safety a bolt force is sized for, > 0 (DefaultTargetFS)
 }
 
