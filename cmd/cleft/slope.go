@@ -121,7 +121,8 @@ func kinematicNet(siteName string, sc *slope.Screening) *plots.KinematicNet {
 		case c.Test == slope.PlanarTest:
 			k.Items = append(k.Items, plots.KinItem{Name: sc.Names(c), Line: c.Line, Feasible: c.Feasible, Toppling: topple[c.A], Fails: c.Fails})
 		case c.Test == slope.WedgeTest && c.HasLine:
-			k.Items = append(k.Items, plots.KinItem{Name: sc.Names(c), Line: c.Line, Intersection: true, Feasible: c.Feasible, Fails: c.Fails})
+			one := c.Feasible && (c.Mode == slope.WedgeOnFirst || c.Mode == slope.WedgeOnSecond)
+			k.Items = append(k.Items, plots.KinItem{Name: sc.Names(c), Line: c.Line, Intersection: true, Feasible: c.Feasible, Fails: c.Fails, OnePlane: one})
 		}
 	}
 	return k
@@ -132,6 +133,6 @@ func slopeFigure(siteName string, sc *slope.Screening) *namedFigure {
 	sl := sc.Slope
 	return &namedFigure{file: "slope-kinematic",
 		title:   fmt.Sprintf("Kinematic screening of the %s face", sl.Face),
-		caption: fmt.Sprintf("Lower-hemisphere equal-area net of lines: dip vectors of the planes (circles) and lines of intersection of every pair (squares). A line daylights when it plots beyond the face's great circle and can slide when it also lies inside the friction circle (φ = %.1f°); the darker zone is planar sliding within ±%g° of the face's dip direction, the paler one wedges. The blue sector is the flexural-toppling envelope. Red and blue symbols are feasible cases; grey ones say which condition fails (open: does not daylight; light: flatter than φ; dark: beyond the lateral limit).", sl.FrictionAngle, sl.LateralLimit),
+		caption: fmt.Sprintf("Lower-hemisphere equal-area net of lines: dip vectors of the planes (circles) and lines of intersection of every pair (diamonds). A line daylights when it plots beyond the face's great circle and can slide when it also lies inside the friction circle (φ = %.1f°). Densely hatched and outlined: the planar sliding zone within ±%g° of the face's dip direction; sparsely hatched across it: the wedge sliding zone; hatched level in the light tone: the flexural toppling envelope (±%g°). Large pale symbols with a heavy outline are the cases that can fail, named (triangle: planar sliding; downward triangle: flexural toppling; diamond: wedge sliding, its mode from the normal reactions of the block, barred when it slides on one plane alone and is then tested by that plane's dip, so that its line may lie outside the zones); small ones are held back, their fill saying by what (white: does not daylight; mid tone: flatter than φ; dark: only the lateral limit).", sl.FrictionAngle, sl.LateralLimit, sl.ToppleLimit),
 		fig:     kinematicNet(siteName, sc), w: cm(19, 0), h: cm(13.5, 0)}
 }
