@@ -160,14 +160,14 @@ func slopeReport(sc *slope.Screening, defaults []string) *report.Table {
 	if len(defaults) > 0 {
 		t.Notes = append(t.Notes, "Defaults applied: "+strings.Join(defaults, "; ")+".")
 	}
-	t.Notes = append(t.Notes, "The feasible cases (every test, feasible or not, with the condition that failed, is in slope.csv; the mode of a wedge comes from the normal reactions of its block, the plan-view rule in brackets where it differs). Planar blocks are per metre of slope (MN/m); a wedge is the largest the two planes cut, its line daylighting at the toe:")
-	t.Columns = []string{"test", "planes", "mode", "line", "φ °", "crack depth m", "weight MN", "volume m³"}
-	t.Numeric = []bool{false, false, false, true, true, true, true, true}
+	t.Notes = append(t.Notes, "The feasible cases (every test, feasible or not, with the condition that failed, is in slope.csv with the wedges' face traces and areas; the mode of a wedge comes from the normal reactions of its block, the plan-view rule in brackets where it differs). Planar blocks are per metre of slope (MN/m); a wedge is the largest the two planes cut, its line daylighting at the toe; its block is its weight and volume. FS columns by water case (m of water at the block's deepest wet point; the head of the table and full cases varies by block, see slope.csv):")
+	t.Columns = []string{"test", "planes", "mode", "line", "φ °", "block"}
+	t.Numeric = []bool{false, false, false, true, true, true}
 	for _, w := range sc.Slope.Water {
-		t.Columns = append(t.Columns, "FS, "+words.WaterCase(w))
+		t.Columns = append(t.Columns, "FS "+words.WaterShort(w))
 		t.Numeric = append(t.Numeric, true)
 	}
-	t.Columns = append(t.Columns, "water to FS = 1, m", fmt.Sprintf("bolt for FS %g", sc.Slope.TargetFS), "least FS")
+	t.Columns = append(t.Columns, "zw to FS 1, m", fmt.Sprintf("bolt for FS %g", sc.Slope.TargetFS), "least FS")
 	t.Numeric = append(t.Numeric, true, true, true)
 	for _, c := range sc.Cases {
 		if !c.Feasible {
@@ -177,11 +177,14 @@ func slopeReport(sc *slope.Screening, defaults []string) *report.Table {
 		if c.Test == slope.WedgeTest && c.HasLine {
 			line = fmt.Sprintf("%03.0f/%02.0f", c.Line.Trend, c.Line.Plunge)
 		}
-		weight, vol := "", ""
-		if w := c.Wedge; w != nil {
-			weight, vol = words.Fixed(w.Weight, 2), words.Fixed(w.Volume, 0)
+		block := ""
+		switch {
+		case c.Wedge != nil:
+			block = fmt.Sprintf("%s MN, %s m³", words.Num(c.Wedge.Weight), words.Fixed(c.Wedge.Volume, 0))
+		case c.Test == slope.PlanarTest && c.FS != nil:
+			block = "crack " + words.Fixed(c.CrackDepth, 1) + " m"
 		}
-		row := []string{c.Test.String(), sc.Names(c), words.Reason(sc, c), line, words.Fixed(c.Phi, 1), words.Fixed(c.CrackDepth, 1), weight, vol}
+		row := []string{c.Test.String(), sc.Names(c), words.Reason(sc, c), line, words.Fixed(c.Phi, 1), block}
 		least := math.Inf(1)
 		for i := range sc.Slope.Water {
 			v := math.NaN()
@@ -200,10 +203,12 @@ func slopeReport(sc *slope.Screening, defaults []string) *report.Table {
 		case c.FS == nil:
 		case math.IsNaN(c.BoltToTarget):
 			bolt = "not reached"
+		case c.BoltToTarget == 0:
+			bolt = "none needed"
 		case c.Test == slope.PlanarTest:
-			bolt = words.Fixed(c.BoltToTarget, 3) + " MN/m"
+			bolt = words.Num(c.BoltToTarget) + " MN/m"
 		default:
-			bolt = words.Fixed(c.BoltToTarget, 3) + " MN"
+			bolt = words.Num(c.BoltToTarget) + " MN"
 		}
 		class, lf := "", ""
 		if c.FS != nil {

@@ -277,3 +277,17 @@ func ReadingLines(cs []slope.Count) []string {
 	}
 	return out
 }
+
+// WaterShort is a water case in a few characters, for column heads: "dry",
+// "5 m", "table 18 m", "full".
+func WaterShort(w slope.Water) string {
+	switch {
+	case w.Kind == slope.WaterFull:
+		return "full"
+	case w.Kind == slope.WaterTable:
+		return fmt.Sprintf("table %g m", w.Depth)
+	case w.Depth == 0:
+		return "dry"
+	}
+	return fmt.Sprintf("%g m", w.Depth)
+}
