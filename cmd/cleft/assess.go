@@ -35,7 +35,8 @@ func newAssessCmd() *cobra.Command {
   mohr.svg/.png             Mohr diagram of effective stress
   report.html, summary.json the report for the project geologist, and its figures
   with readings_file:       sets.csv, sets-density.svg/.png (see cleft sets)
-  with slope:               slope.csv, slope-kinematic.svg/.png (see cleft slope)
+  with slope:               slope.csv, slope-kinematic.svg/.png (see cleft slope);
+                            with readings also slope-readings.csv
   with tunnel:              stations.csv, wall.csv, profile.csv, tunnel-*.svg/.png
 
 and prints a short summary: how many planes are critical or opening, the
@@ -60,6 +61,7 @@ least stable three, and the frictional-limit check of the stress model.
 type screened struct {
 	*assess.Assessment
 	slope  *slope.Screening  // when the site has a slope
+	counts []slope.Count     // the readings against the slope's tests, when it has both
 	tunnel *tunnel.Screening // when the site has a tunnel
 }
 
@@ -71,7 +73,7 @@ func screenAll(s *site.Site) (*screened, error) {
 	}
 	sc := &screened{Assessment: a}
 	if s.Slope != nil {
-		sc.slope = a.Slope()
+		sc.slope, sc.counts = a.Slope(), a.SlopeReadings()
 	}
 	if s.Tunnel != nil {
 		if sc.tunnel, err = a.Tunnel(); err != nil {
@@ -113,7 +115,7 @@ func runAssess(o assessOptions, stdout io.Writer) error {
 		more = append(more, tunnelTables(a.tunnel)...)
 	}
 	if a.slope != nil {
-		more = append(more, csvTable("slope.csv", table.Slope(a.slope)))
+		more = append(more, slopeTables(a.slope, a.counts)...)
 	}
 	if a.Grouping != nil {
 		more = append(more, csvTable("sets.csv", table.AssessedSets(a.Assessment)))
@@ -133,7 +135,7 @@ func runAssess(o assessOptions, stdout io.Writer) error {
 	printSummary(&b, s, facts)
 	if a.slope != nil {
 		b.WriteString("\n")
-		printSlope(&b, a.slope)
+		printSlope(&b, a.slope, a.counts)
 	}
 	if a.tunnel != nil {
 		b.WriteString("\n")

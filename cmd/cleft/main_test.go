@@ -106,7 +106,7 @@ func TestAssessExample(t *testing.T) {
 	if code != 0 {
 		t.Fatalf("exit %d: %s", code, stderr)
 	}
-	for _, want := range []string{"139 planes were screened", "1 is critical", "1 is opening", "137 are stable", "3 sets", "1 planar, 2 wedge", "The least stable are F2", "frictional-limit check", "not a substitute"} {
+	for _, want := range []string{"139 planes were screened", "1 is critical", "1 is opening", "137 are stable", "3 sets", "1 planar, 3 wedge", "The least stable are F2", "frictional-limit check", "not a substitute"} {
 		if !strings.Contains(out, want) {
 			t.Errorf("summary lacks %q:\n%s", want, out)
 		}

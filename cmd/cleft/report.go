@@ -49,6 +49,9 @@ func (a *screened) report(example bool, facts assess.Facts, figs []*namedFigure)
 	}
 	if a.slope != nil {
 		r.Slope = slopeReport(a.slope, s.SlopeDefaults)
+		if a.counts != nil {
+			r.SlopeReadings = slopeReadingsReport(a.counts)
+		}
 	}
 	if a.tunnel != nil {
 		r.Tunnel = tunnelReport(a.tunnel, s.TunnelDefaults)
@@ -149,22 +152,23 @@ func (a *screened) setsTable() *report.Table {
 }
 
 // slopeReport is the slope screening as the report shows it: the settings
-// and defaults, the counts, and the feasible cases.
+// and defaults, the counts, and the feasible cases with their blocks and
+// factors of safety.
 func slopeReport(sc *slope.Screening, defaults []string) *report.Table {
 	lines := words.SlopeLines(sc)
-	t := &report.Table{Notes: lines[:2], Empty: "No test is kinematically feasible for this face."}
+	t := &report.Table{Notes: lines[:3], Empty: "No test is kinematically feasible for this face."}
 	if len(defaults) > 0 {
 		t.Notes = append(t.Notes, "Defaults applied: "+strings.Join(defaults, "; ")+".")
 	}
-	t.Notes = append(t.Notes, "The feasible cases (every test, feasible or not, with the condition that failed, is in slope.csv):")
-	t.Columns = []string{"test", "planes", "mode", "line", "φ °", "crack depth m"}
+	t.Notes = append(t.Notes, "The feasible cases (every test, feasible or not, with the condition that failed, is in slope.csv with the wedges' face traces and areas; the mode of a wedge comes from the normal reactions of its block, the plan-view rule in brackets where it differs). Planar blocks are per metre of slope (MN/m); a wedge is the largest the two planes cut, its line daylighting at the toe; its block is its weight and volume. FS columns by water case (m of water at the block's deepest wet point; the head of the table and full cases varies by block, see slope.csv):")
+	t.Columns = []string{"test", "planes", "mode", "line", "φ °", "block"}
 	t.Numeric = []bool{false, false, false, true, true, true}
-	for _, f := range sc.Slope.CrackFill {
-		t.Columns = append(t.Columns, fmt.Sprintf("FS, crack %g%% full", 100*f))
+	for _, w := range sc.Slope.Water {
+		t.Columns = append(t.Columns, "FS "+words.WaterShort(w))
 		t.Numeric = append(t.Numeric, true)
 	}
-	t.Columns = append(t.Columns, "water to FS = 1, m")
-	t.Numeric = append(t.Numeric, true)
+	t.Columns = append(t.Columns, "zw to FS 1, m", fmt.Sprintf("bolt for FS %g", sc.Slope.TargetFS), "least FS")
+	t.Numeric = append(t.Numeric, true, true, true)
 	for _, c := range sc.Cases {
 		if !c.Feasible {
 			continue
@@ -173,19 +177,59 @@ func slopeReport(sc *slope.Screening, defaults []string) *report.Table {
 		if c.Test == slope.WedgeTest && c.HasLine {
 			line = fmt.Sprintf("%03.0f/%02.0f", c.Line.Trend, c.Line.Plunge)
 		}
-		row := []string{c.Test.String(), sc.Names(c), words.Reason(sc, c), line, words.Fixed(c.Phi, 1), words.Fixed(c.CrackDepth, 1)}
-		for i := range sc.Slope.CrackFill {
+		block := ""
+		switch {
+		case c.Wedge != nil:
+			block = fmt.Sprintf("%s MN, %s m³", words.Num(c.Wedge.Weight), words.Fixed(c.Wedge.Volume, 0))
+		case c.Test == slope.PlanarTest && c.FS != nil:
+			block = "crack " + words.Fixed(c.CrackDepth, 1) + " m"
+		}
+		row := []string{c.Test.String(), sc.Names(c), words.Reason(sc, c), line, words.Fixed(c.Phi, 1), block}
+		least := math.Inf(1)
+		for i := range sc.Slope.Water {
 			v := math.NaN()
 			if i < len(c.FS) {
 				v = c.FS[i]
+				least = math.Min(least, v)
 			}
-			row = append(row, words.Fixed(v, 2))
+			row = append(row, words.FS(v))
 		}
 		w := words.Fixed(c.WaterToFail, 1)
 		if c.Test == slope.PlanarTest && math.IsNaN(c.WaterToFail) {
 			w = "not reached"
 		}
-		t.Rows = append(t.Rows, report.Row{Cells: append(row, w)})
+		bolt := ""
+		switch {
+		case c.FS == nil:
+		case math.IsNaN(c.BoltToTarget):
+			bolt = "not reached"
+		case c.BoltToTarget == 0:
+			bolt = "none needed"
+		case c.Test == slope.PlanarTest:
+			bolt = words.Num(c.BoltToTarget) + " MN/m"
+		default:
+			bolt = words.Num(c.BoltToTarget) + " MN"
+		}
+		class, lf := "", ""
+		if c.FS != nil {
+			lf = words.FS(least)
+			if least <= 1 {
+				class, lf = "critical", "▲ "+lf
+			}
+		}
+		t.Rows = append(t.Rows, report.Row{Class: class, Cells: append(row, w, bolt, lf)})
+	}
+	return t
+}
+
+// slopeReadingsReport is the readings against the slope's tests.
+func slopeReadingsReport(counts []slope.Count) *report.Table {
+	t := &report.Table{Notes: words.ReadingLines(counts)[1:],
+		Columns: []string{"test", "sets", "tested", "passing", "share %", "weighted share %"},
+		Numeric: []bool{false, false, true, true, true, true}}
+	for _, c := range counts {
+		t.Rows = append(t.Rows, report.Row{Cells: []string{c.Test.String(), words.SetsOf(c), fmt.Sprint(c.Tested), fmt.Sprint(c.Pass),
+			words.Fixed(100*c.Share(), 1), words.Fixed(100*c.WeightedShare(), 1)}})
 	}
 	return t
 }

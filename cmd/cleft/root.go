@@ -59,7 +59,7 @@ the strength of the discontinuities and the mapped planes (dip / dip direction)
 — and works out, for every plane, the normal and shear stress, slip and
 dilation tendency, factor of safety, the rise in water pressure that would make
 it slip, and the sense of slip; groups raw field readings into joint sets;
-screens a cut slope (planar, wedge, toppling, tension-crack factor of safety)
+screens a cut slope (planar, wedge, toppling; planar and wedge factors of safety)
 and a tunnel alignment (boundary stresses, joint slip at the wall); and writes
 stereonets, Mohr diagrams, charts and a self-contained report.
 

@@ -23,17 +23,23 @@ func newSlopeCmd() *cobra.Command {
 	var o slopeOptions
 	c := &cobra.Command{
 		Use:   "slope SITE.yaml [--out DIR]",
-		Short: "Kinematic tests and planar factor of safety for a cut slope",
+		Short: "Kinematic tests, planar and wedge factors of safety for a cut slope",
 		Long: `slope screens the cut face of the site file's slope: block against its
 planes (the planes table and inline planes, and the mean plane of every joint
 set of the readings): planar sliding (Markland's test as refined by Hoek &
 Bray 1981), wedge sliding on every pair (the line of intersection; sliding on
-one plane or both), flexural toppling (Goodman & Bray 1976), and for every
-feasible planar case the limit-equilibrium factor of safety with a tension
-crack (Hoek & Bray 1981; Wyllie & Mah 2004) for each water case, and the water
-depth in the crack at which it falls to 1. Each test that fails says which
-condition. With --out: slope.csv and a kinematic stereonet
-(slope-kinematic.svg/.png). Direct toppling is not tested.
+one plane or both, decided by the normal reactions of the block), flexural
+toppling (Goodman & Bray 1976). Every feasible planar case gets the
+limit-equilibrium factor of safety with a tension crack (Hoek & Bray 1981;
+Wyllie & Mah 2004), and every feasible wedge its block (volume, weight, face
+traces) and factor of safety from the vector solution of its normal
+reactions, each for every water case (m of water, the site's water table
+below the crest, saturated) with the slope's bolt and seismic load, and the
+bolt force for target_fs. With readings, every reading (and every pair of
+readings when there are fewer than 500) is run through the tests: counts
+and weighted shares per set. With --out: slope.csv, slope-readings.csv (with
+readings) and a kinematic stereonet (slope-kinematic.svg/.png). Direct
+toppling is not tested.
 
 ` + caution,
 		Args: oneSite,
@@ -42,7 +48,7 @@ condition. With --out: slope.csv and a kinematic stereonet
 			return runSlope(o, cmd.OutOrStdout())
 		},
 	}
-	c.Flags().StringVar(&o.out, "out", "", "output folder for slope.csv and the kinematic stereonet")
+	c.Flags().StringVar(&o.out, "out", "", "output folder for slope.csv, slope-readings.csv and the kinematic stereonet")
 	return c
 }
 
@@ -51,15 +57,15 @@ func runSlope(o slopeOptions, stdout io.Writer) error {
 	if err != nil {
 		return err
 	}
-	sc := a.Slope()
+	sc, counts := a.Slope(), a.SlopeReadings()
 	var b strings.Builder
-	printSlope(&b, sc)
+	printSlope(&b, sc, counts)
 	if o.out != "" {
 		if err := makeDir(o.out); err != nil {
 			return err
 		}
 		out := &outputs{dir: o.out}
-		if err := out.tables(csvTable("slope.csv", table.Slope(sc))); err != nil {
+		if err := out.tables(slopeTables(sc, counts)...); err != nil {
 			return err
 		}
 		if err := out.figures([]*namedFigure{slopeFigure(a.Site.Name, sc)}); err != nil {
@@ -72,11 +78,24 @@ func runSlope(o slopeOptions, stdout io.Writer) error {
 	return err
 }
 
-// printSlope prints the feasible cases in a few lines.
-func printSlope(b *strings.Builder, sc *slope.Screening) {
+// printSlope prints the feasible cases in a few lines, and the readings
+// against the tests.
+func printSlope(b *strings.Builder, sc *slope.Screening, counts []slope.Count) {
 	for _, l := range words.SlopeLines(sc) {
 		b.WriteString(l + "\n")
 	}
+	for _, l := range words.ReadingLines(counts) {
+		b.WriteString(l + "\n")
+	}
+}
+
+// slopeTables are slope.csv and, with readings, slope-readings.csv.
+func slopeTables(sc *slope.Screening, counts []slope.Count) []namedTable {
+	t := []namedTable{csvTable("slope.csv", table.Slope(sc))}
+	if counts != nil {
+		t = append(t, csvTable("slope-readings.csv", table.SlopeReadings(counts)))
+	}
+	return t
 }
 
 // kinematicNet draws the screening on a kinematic stereonet.
@@ -102,7 +121,8 @@ func kinematicNet(siteName string, sc *slope.Screening) *plots.KinematicNet {
 		case c.Test == slope.PlanarTest:
 			k.Items = append(k.Items, plots.KinItem{Name: sc.Names(c), Line: c.Line, Feasible: c.Feasible, Toppling: topple[c.A], Fails: c.Fails})
 		case c.Test == slope.WedgeTest && c.HasLine:
-			k.Items = append(k.Items, plots.KinItem{Name: sc.Names(c), Line: c.Line, Intersection: true, Feasible: c.Feasible, Fails: c.Fails})
+			one := c.Feasible && (c.Mode == slope.WedgeOnFirst || c.Mode == slope.WedgeOnSecond)
+			k.Items = append(k.Items, plots.KinItem{Name: sc.Names(c), Line: c.Line, Intersection: true, Feasible: c.Feasible, Fails: c.Fails, OnePlane: one})
 		}
 	}
 	return k
@@ -113,6 +133,6 @@ func slopeFigure(siteName string, sc *slope.Screening) *namedFigure {
 	sl := sc.Slope
 	return &namedFigure{file: "slope-kinematic",
 		title:   fmt.Sprintf("Kinematic screening of the %s face", sl.Face),
-		caption: fmt.Sprintf("Lower-hemisphere equal-area net of lines: dip vectors of the planes (circles) and lines of intersection of every pair (squares). A line daylights when it plots beyond the face's great circle and can slide when it also lies inside the friction circle (φ = %.1f°); the darker zone is planar sliding within ±%g° of the face's dip direction, the paler one wedges. The blue sector is the flexural-toppling envelope. Red and blue symbols are feasible cases; grey ones say which condition fails (open: does not daylight; light: flatter than φ; dark: beyond the lateral limit).", sl.FrictionAngle, sl.LateralLimit),
+		caption: fmt.Sprintf("Lower-hemisphere equal-area net of lines: dip vectors of the planes (circles) and lines of intersection of every pair (diamonds). A line daylights when it plots beyond the face's great circle and can slide when it also lies inside the friction circle (φ = %.1f°). Densely hatched and outlined: the planar sliding zone within ±%g° of the face's dip direction; sparsely hatched across it: the wedge sliding zone; hatched level in the light tone: the flexural toppling envelope (±%g°). Large pale symbols with a heavy outline are the cases that can fail, named (triangle: planar sliding; downward triangle: flexural toppling; diamond: wedge sliding, its mode from the normal reactions of the block, barred when it slides on one plane alone and is then tested by that plane's dip, so that its line may lie outside the zones); small ones are held back, their fill saying by what (white: does not daylight; mid tone: flatter than φ; dark: only the lateral limit).", sl.FrictionAngle, sl.LateralLimit, sl.ToppleLimit),
 		fig:     kinematicNet(siteName, sc), w: cm(19, 0), h: cm(13.5, 0)}
 }

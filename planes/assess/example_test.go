@@ -33,6 +33,6 @@ func ExampleNew() {
 	// Output:
 	// 139 planes and readings: 1 critical, 1 opening; least stable F2
 	// 3 sets from 133 readings
-	// slope: 1 planar, 2 wedge, 1 toppling cases feasible
+	// slope: 1 planar, 3 wedge, 1 toppling cases feasible
 	// tunnel: 57 stations, largest σmax/UCS 0.33 at 575 m
 }

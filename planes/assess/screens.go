@@ -44,6 +44,30 @@ func (a *Assessment) Slope() *slope.Screening {
 	return slope.Screen(*a.Site.Slope, a.Candidates())
 }
 
+// SlopeReadings runs every field reading (and every pair of readings when
+// there are fewer than slope.MaxPairReadings) through the slope's kinematic
+// tests, each with its own friction where it gives one, weighted by the
+// grouping's weights (Terzaghi's when a line is given): counts per set.
+// Nil without readings; it panics when the site has no slope.
+func (a *Assessment) SlopeReadings() []slope.Count {
+	sl := a.Site.Slope
+	if sl == nil {
+		panic("assess: SlopeReadings of a site without a slope")
+	}
+	if a.Grouping == nil {
+		return nil
+	}
+	rs := make([]slope.Reading, 0, len(a.Planes)-a.NPlanes)
+	for i, p := range a.Planes[a.NPlanes:] {
+		r := slope.Reading{Orientation: p.Orientation, Phi: sl.FrictionAngle, Set: a.Grouping.Analysis.Assign[i], Weight: a.Grouping.Weight(i)}
+		if !math.IsNaN(p.Friction) {
+			r.Phi = math.Atan(p.Friction) * geom.Deg
+		}
+		rs = append(rs, r)
+	}
+	return slope.Tally(*sl, rs, len(a.Sets))
+}
+
 // Targets are the planes and sets the tunnel is screened against: those
 // named by tunnel.sets, or every site plane (not the readings) and every
 // set mean ("S1", …). A name that matches nothing is an error naming the

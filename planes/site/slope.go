@@ -10,7 +10,7 @@ import (
 )
 
 func (s *Site) readSlope(v node) error {
-	m, err := v.mapping("face", "top", "height", "friction_angle", "lateral_limit", "toppling_limit", "unit_weight", "water", "tension_crack", "source")
+	m, err := v.mapping("face", "top", "height", "friction_angle", "lateral_limit", "toppling_limit", "unit_weight", "water", "tension_crack", "bolt", "seismic", "target_fs", "source")
 	if err != nil {
 		return err
 	}
@@ -93,31 +93,11 @@ func (s *Site) readSlope(v node) error {
 	default:
 		return m.missing("unit_weight", " (MN/m³): a measured stress model gives no rock density")
 	}
-	sl.CrackFill = []float64{0, 0.5, 1}
-	if wv, ok := m.get("water"); ok {
-		wm, err := wv.mapping("tension_crack_fill")
-		if err != nil {
-			return err
-		}
-		if fv, ok := wm.get("tension_crack_fill"); ok {
-			items, err := fv.list()
-			if err != nil {
-				return err
-			}
-			if len(items) == 0 {
-				return fv.errf("give at least one fraction in [0, 1]").is(ErrEmpty)
-			}
-			sl.CrackFill = nil
-			for _, it := range items {
-				f, err := it.numberIn(interval{lo: 0, hi: 1})
-				if err != nil {
-					return err
-				}
-				sl.CrackFill = append(sl.CrackFill, f)
-			}
-		}
-	} else {
-		defaults = append(defaults, "water.tension_crack_fill = [0, 0.5, 1]")
+	if defaults, err = s.readSlopeWater(m, sl, defaults); err != nil {
+		return err
+	}
+	if defaults, err = readSlopeLoads(m, sl, defaults); err != nil {
+		return err
 	}
 	if cv, ok := m.get("tension_crack"); ok {
 		cm, err := cv.mapping("distance", "depth")
@@ -140,7 +120,7 @@ func (s *Site) readSlope(v node) error {
 			return err
 		}
 	} else {
-		defaults = append(defaults, "tension_crack = Hoek & Bray's critical depth for each plane")
+		defaults = append(defaults, "tension_crack = Hoek & Bray's critical depth for each planar block, none in a wedge")
 	}
 	if c, ok := s.Criterion.(*planes.Coulomb); ok {
 		sl.Cohesion = c.Cohesion

@@ -87,28 +87,74 @@ func NewPlanarBlock(h, faceDip, topDip, planeDip, crack float64, byDepth bool, g
 //
 // c in MPa, φ in degrees. A negative effective normal force (uplift beyond
 // the weight) is taken as 0: the block floats and only cohesion holds it.
+// It is FSWith and no load.
 func (b PlanarBlock) FS(c, phi, zw float64) float64 {
+	return b.FSWith(c, phi, zw, PlanarLoad{})
+}
+
+// FSWith returns the factor of safety with water to depth zw in the crack
+// and the load ld: a bolt force T (MN/m) pulling into the slope at ψT below
+// the horizontal and a horizontal seismic force α·W out of the face
+// (Wyllie & Mah 2004, ch. 6):
+//
+//	FS = [cA + (W(cos ψp − α sin ψp) − U − V sin ψp + T sin(ψT + ψp)) tan φ]
+//	   / [W(sin ψp + α cos ψp) + V cos ψp − T cos(ψT + ψp)]
+//
+// A negative effective normal force is taken as 0, as in FS; a denominator
+// ≤ 0 (nothing drives the block) gives +Inf. It costs a few dozen
+// floating-point operations and allocates nothing.
+func (b PlanarBlock) FSWith(c, phi, zw float64, ld PlanarLoad) float64 {
 	sp, cp := math.Sincos(b.PlaneDip * math.Pi / 180)
+	st, ct := math.Sincos((ld.BoltPlunge + b.PlaneDip) * math.Pi / 180)
 	U := 0.5 * insitu.Hydrostatic * zw * b.Length
 	V := 0.5 * insitu.Hydrostatic * zw * zw
-	n := math.Max(0, b.Weight*cp-U-V*sp)
-	return (c*b.Length + n*tand(phi)) / (b.Weight*sp + V*cp)
+	a := ld.Seismic
+	n := math.Max(0, b.Weight*(cp-a*sp)-U-V*sp+ld.Bolt*st)
+	d := b.Weight*(sp+a*cp) + V*cp - ld.Bolt*ct
+	if d <= 0 {
+		return math.Inf(1)
+	}
+	return (c*b.Length + n*tand(phi)) / d
+}
+
+// BoltFor returns the smallest bolt force (MN/m) in the direction of ld
+// that brings the block with water to zw in the crack to the factor of
+// safety target; ld.Bolt is replaced. False when no force in that
+// direction does.
+func (b PlanarBlock) BoltFor(c, phi, zw float64, ld PlanarLoad, target float64) (float64, bool) {
+	return boltFor(func(t float64) float64 {
+		ld.Bolt = t
+		return b.FSWith(c, phi, zw, ld)
+	}, target, b.Weight/64)
+}
+
+// FootElevation is the height of the crack's foot above the toe, m (the
+// point where the water pressure on the plane is greatest).
+func (b PlanarBlock) FootElevation() float64 {
+	return (b.Height/tand(b.FaceDip) + b.Behind) * tand(b.PlaneDip)
 }
 
 // WaterDepthToFail returns the depth of water in the tension crack at which
 // the factor of safety falls to 1, by bisection on [0, z]: 0 when the block
-// is at or below 1 dry, NaN when even a full crack leaves it above 1.
+// is at or below 1 dry, NaN when even a full crack leaves it above 1. It is
+// WaterDepthToFailWith and no load.
 func (b PlanarBlock) WaterDepthToFail(c, phi float64) float64 {
-	if b.FS(c, phi, 0) <= 1 {
+	return b.WaterDepthToFailWith(c, phi, PlanarLoad{})
+}
+
+// WaterDepthToFailWith is WaterDepthToFail with the load ld.
+func (b PlanarBlock) WaterDepthToFailWith(c, phi float64, ld PlanarLoad) float64 {
+	fs := func(zw float64) float64 { return b.FSWith(c, phi, zw, ld) }
+	if fs(0) <= 1 {
 		return 0
 	}
-	if b.CrackDepth == 0 || b.FS(c, phi, b.CrackDepth) > 1 {
+	if b.CrackDepth == 0 || fs(b.CrackDepth) > 1 {
 		return math.NaN()
 	}
 	lo, hi := 0.0, b.CrackDepth
 	for range 100 {
 		mid := (lo + hi) / 2
-		if b.FS(c, phi, mid) > 1 {
+		if fs(mid) > 1 {
 			lo = mid
 		} else {
 			hi = mid

@@ -14,7 +14,7 @@ func ExampleScreen() {
 	sl := slope.Slope{
 		Face: planes.MustNew(60, 180), Top: planes.MustNew(0, 180), Height: 20,
 		FrictionAngle: 30, LateralLimit: 20, ToppleLimit: 20, UnitWeight: 0.026,
-		CrackFill: []float64{0, 1},
+		Water: []slope.Water{{}, {Kind: slope.WaterFull}}, TargetFS: 1.5,
 	}
 	cands := []slope.Candidate{
 		{Name: "bedding", Orientation: planes.MustNew(35, 175), Phi: 30},
@@ -27,13 +27,16 @@ func ExampleScreen() {
 			continue
 		}
 		fmt.Printf("%s %s", c.Test, sc.Names(c))
-		if c.FS != nil {
+		switch {
+		case c.Test == slope.PlanarTest:
 			fmt.Printf(": crack %.1f m, FS dry %.2f, full %.2f", c.CrackDepth, c.FS[0], c.FS[1])
+		case c.Wedge != nil:
+			fmt.Printf(": %s, %.0f m³, %.1f MN, FS dry %.2f, saturated (%.1f m) %.2f", c.Mode, c.Wedge.Volume, c.Wedge.Weight, c.FS[0], c.Heads[1], c.FS[1])
 		}
 		fmt.Println()
 	}
 	// Output:
 	// planar bedding: crack 7.3 m, FS dry 0.82, full 0.50
-	// wedge bedding+J2
+	// wedge bedding+J2: first-plane, 11343 m³, 294.9 MN, FS dry 0.82, saturated (10.0 m) 0.43
 	// flexural-toppling J1
 }

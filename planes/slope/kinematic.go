@@ -35,7 +35,28 @@ const (
 	WedgeOnFirst              // a wedge sliding on its first plane alone
 	WedgeOnSecond             // a wedge sliding on its second plane alone
 	Flexural                  // flexural toppling
+	LiftOff                   // a wedge off both planes: both overhang it (it falls), or water or loads push it off
 )
+
+// String returns the mode's token in the tables: planar, both-planes,
+// first-plane, second-plane, flexural-toppling, lift-off, or "" for NoMode.
+func (m Mode) String() string {
+	switch m {
+	case PlanarSlide:
+		return "planar"
+	case WedgeBoth:
+		return "both-planes"
+	case WedgeOnFirst:
+		return "first-plane"
+	case WedgeOnSecond:
+		return "second-plane"
+	case Flexural:
+		return "flexural-toppling"
+	case LiftOff:
+		return "lift-off"
+	}
+	return ""
+}
 
 // Kinematic is the outcome of one kinematic test: feasible with its Mode, or
 // the conditions that fail; and the figures behind the verdict, so that a
@@ -53,6 +74,14 @@ type Kinematic struct {
 	FaceApparent float64 // apparent dip of the face along Trend, °
 	ToppleSum    float64 // flexural toppling: (90° − dip) + φ, °
 	FaceDip      float64 // true dip of the face, °
+
+	// Wedges: SlideDip is the plunge of the direction of sliding that the
+	// friction test used (the line's plunge on both planes, the plane's dip
+	// on one); PlanView is the mode by the plan-view rule, reported beside
+	// the mechanics (see WedgeSliding), NoMode for other tests.
+	SlideDip float64
+	Sliding  Mode // wedges: the mode by the mechanics, feasible or not
+	PlanView Mode
 }
 
 // Conventions at the boundaries (this tool's choice, the cautious one where
@@ -87,19 +116,26 @@ func PlanarSliding(p, f planes.Orientation, phi, lateral float64) Kinematic {
 
 // WedgeSliding tests the wedge of planes a and b, of friction angles phiA
 // and phiB (degrees), on face f (Hoek & Bray 1981): the line of intersection
-// points out of the face (its trend within 90° of the face's dip direction),
-// daylights (plunges less than the face's apparent dip along its trend) and
-// plunges at least as steeply as the friction angle of the sliding. The wedge
-// slides on one plane alone when that plane's dip direction lies between the
-// line's trend and the face's dip direction (Hoek & Bray 1981; Wyllie & Mah
-// 2004), else on both. The friction angle tested is that of the plane it
-// slides on, and for sliding on both planes the smaller of the two: the
-// friction circle of the weaker plane is the cautious screen when the planes
-// differ (Wyllie & Mah 2004, ch. 7, memory; a both-plane wedge can slide
-// once the line is steeper than the weaker plane's friction angle only if
-// the stronger plane's share of the load is small, so this may flag wedges
-// that the factor of safety then clears). It returns the line (towards the
-// face when horizontal) and false in place of it for parallel planes.
+// points out of the face (its trend within 90° of the face's dip direction)
+// and daylights (plunges less than the face's apparent dip along its
+// trend), and the direction of sliding is at least as steep as the friction
+// angle of the sliding.
+//
+// The mode comes from the mechanics (WeightMode): the normal reactions of
+// the rigid block on the two planes under its weight. Both positive: it
+// slides along the line, which must plunge at least the smaller of the two
+// friction angles (the weaker plane's friction circle is the cautious screen
+// when the planes differ; a both-plane wedge can slide once the line is
+// steeper than the weaker plane's φ only if the stronger plane's share of
+// the load is small, so this may flag wedges that the factor of safety then
+// clears). One not positive: contact is lost there and the block slides
+// down the dip of the other plane, which must dip at least that plane's φ.
+// The plan-view rule (a plane slides alone when its dip direction lies
+// between the line's trend and the face's dip direction; Hoek & Bray 1981)
+// is kept in Kinematic.PlanView; it does not decide.
+//
+// It returns the line (towards the face when horizontal) and false in place
+// of it for parallel planes.
 func WedgeSliding(a, b, f planes.Orientation, phiA, phiB float64) (geom.Line, bool, Kinematic) {
 	k := Kinematic{Phi: math.Min(phiA, phiB), FaceDip: f.Dip()}
 	l, ok := Intersection(a, b)
@@ -117,14 +153,22 @@ func WedgeSliding(a, b, f planes.Orientation, phiA, phiB float64) (geom.Line, bo
 	if k.Offset >= 90 || !(l.Plunge < k.FaceApparent) {
 		k.Fails |= Daylight
 	}
-	mode := WedgeBoth
+	k.PlanView = WedgeBoth
 	if between(a.DipDirection(), l.Trend, f.DipDirection()) {
-		mode, k.Phi = WedgeOnFirst, phiA
+		k.PlanView = WedgeOnFirst
 	}
 	if between(b.DipDirection(), l.Trend, f.DipDirection()) {
-		mode, k.Phi = WedgeOnSecond, phiB
+		k.PlanView = WedgeOnSecond
 	}
-	if l.Plunge < k.Phi {
+	mode := WeightMode(a, b, f)
+	k.Sliding, k.SlideDip = mode, l.Plunge
+	switch mode {
+	case WedgeOnFirst:
+		k.Phi, k.SlideDip = phiA, a.Dip()
+	case WedgeOnSecond:
+		k.Phi, k.SlideDip = phiB, b.Dip()
+	}
+	if k.SlideDip < k.Phi && mode != LiftOff { // a block both planes overhang falls
 		k.Fails |= Friction
 	}
 	if k.Feasible = k.Fails == 0; k.Feasible {

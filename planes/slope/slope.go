@@ -11,11 +11,14 @@ type Slope struct {
 	LateralLimit  float64            // planar sliding, ° in (0, 90]
 	ToppleLimit   float64            // flexural toppling, ° in (0, 90]
 	UnitWeight    float64            // γ of the rock, MN/m³
-	CrackFill     []float64          // water cases: fractions of the crack depth filled, in [0, 1]
+	Water         []Water            // water cases, at least one
 	Crack         float64            // tension crack: depth (CrackByDepth) or distance behind the crest, m ≥ 0
 	CrackByDepth  bool
-	CrackGiven    bool    // false: Hoek & Bray's critical depth for each plane
+	CrackGiven    bool    // false: Hoek & Bray's critical depth for each planar block, no crack in a wedge
 	Cohesion      float64 // c of planes without their own cohesion, MPa ≥ 0
+	Load          Load    // bolt (Bolt: MN per metre on planar blocks) and seismic load on every block
+	WedgeBolt     float64 // the bolt force on each wedge, MN, in the direction of Load
+	TargetFS      float64 // the factor of safety a bolt force is sized for, > 0 (DefaultTargetFS)
 }
 
 // Candidate is a plane tested against the slope, with the strength of its

@@ -91,9 +91,13 @@ func TestWedgeSliding(t *testing.T) {
 		// Line 20.9 → 201.3: daylights in a 65/210 face but plunges below φ = 30.
 		{"line flatter than φ", planes.MustNew(50, 130), planes.MustNew(30, 250), NoMode, Friction},
 		{"both planes", planes.MustNew(55, 170), planes.MustNew(55, 250), WedgeBoth, 0},
-		// Line 227/48: A dips to 218, between the face (210) and the line.
-		{"one plane", planes.MustNew(48, 218), planes.MustNew(75, 300), WedgeOnFirst, 0},
-		{"the other plane", planes.MustNew(75, 300), planes.MustNew(48, 218), WedgeOnSecond, 0},
+		// Line 205/45: sliding down A's dip (45° to 210) moves away from B
+		// (derived: d̂A·n̂B = sin 85° cos 45° cos 80° − cos 85° sin 45° = 0.061 > 0).
+		{"one plane", planes.MustNew(45, 210), planes.MustNew(85, 290), WedgeOnFirst, 0},
+		{"the other plane", planes.MustNew(85, 290), planes.MustNew(45, 210), WedgeOnSecond, 0},
+		// Line 227/48: B (75/300) overhangs the block, whose outcrop on the
+		// face lies between the traces' upward rays; A carries it alone.
+		{"one plane, the other overhanging", planes.MustNew(48, 218), planes.MustNew(75, 300), WedgeOnFirst, 0},
 		{"into the slope", planes.MustNew(50, 20), planes.MustNew(50, 80), NoMode, Daylight},
 		{"steeper than the face", planes.MustNew(80, 170), planes.MustNew(80, 250), NoMode, Daylight},
 		{"parallel", planes.MustNew(50, 200), planes.MustNew(50, 200), NoMode, Parallel},

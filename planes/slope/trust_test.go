@@ -21,7 +21,7 @@ func TestOwnFrictionInTheKinematicTests(t *testing.T) {
 	// with the plane's own φ, and the dry cohesionless factor of safety is
 	// tan φ / tan ψp = 0.45 / tan 30° = 0.779 (lecture notes, read).
 	sl := Slope{Face: planes.MustNew(60, 180), Top: planes.MustNew(0, 180), Height: 20, FrictionAngle: 35,
-		LateralLimit: 20, ToppleLimit: 20, UnitWeight: 0.026, CrackFill: []float64{0}}
+		LateralLimit: 20, ToppleLimit: 20, UnitWeight: 0.026, Water: []Water{{}}}
 	gouge := Candidate{Name: "gouge", Orientation: planes.MustNew(30, 180), Phi: phiOf(0.45)}
 	sc := Screen(sl, []Candidate{gouge})
 	c := sc.Cases[0]
@@ -74,7 +74,7 @@ func TestDescendingTop(t *testing.T) {
 	// hand calculation of the issue, checked by a separate polygon sum).
 	// Flattening the top gave 6.12 m and 1.091/0.925/0.713.
 	sl := Slope{Face: planes.MustNew(60, 180), Top: planes.MustNew(10, 0), Height: 20, FrictionAngle: 35,
-		LateralLimit: 20, ToppleLimit: 20, UnitWeight: 0.026, CrackFill: []float64{0, 0.5, 1}, Crack: 5, CrackGiven: true}
+		LateralLimit: 20, ToppleLimit: 20, UnitWeight: 0.026, Water: []Water{{}, {Depth: 5.2338 / 2}, {Kind: WaterFull}}, Crack: 5, CrackGiven: true}
 	sc := Screen(sl, []Candidate{{Name: "P", Orientation: planes.MustNew(40, 180), Phi: 35, Cohesion: 0.02}})
 	c := sc.Cases[0]
 	if c.FS == nil || !scalar.EqualWithinAbs(c.CrackDepth, 5.2338, tol) {
@@ -82,7 +82,7 @@ func TestDescendingTop(t *testing.T) {
 	}
 	for i, want := range []float64{1.0972, 0.9550, 0.7757} {
 		if !scalar.EqualWithinAbs(c.FS[i], want, tol) {
-			t.Errorf("fill %v: FS %v, want %v", sl.CrackFill[i], c.FS[i], want)
+			t.Errorf("water %v: FS %v, want %v", sl.Water[i], c.FS[i], want)
 		}
 	}
 }

@@ -26,10 +26,12 @@ type Report struct {
 	BySet     bool    // Planes.Groups are joint sets
 	Sets      *Table  // joint sets of the field readings, or nil
 	Slope     *Table  // the rock-slope screening, or nil
-	Tunnel    *Table  // the tunnel screening, or nil
-	Figures   []Figure
-	Criterion string // the site criterion in words
-	Caution   string
+	// SlopeReadings is the field readings against the slope's tests, or nil.
+	SlopeReadings *Table
+	Tunnel        *Table // the tunnel screening, or nil
+	Figures       []Figure
+	Criterion     string // the site criterion in words
+	Caution       string
 }
 
 // Input is an input file with its SHA-256, so that a reader can tell which

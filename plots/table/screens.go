@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 	"strconv"
+	"strings"
 
 	"cleft/insitu/opening"
 	"cleft/planes/slope"
@@ -13,28 +14,69 @@ import (
 
 // Slope is slope.csv: every test of every candidate and pair.
 func Slope(sc *slope.Screening) [][]string {
-	cols := []string{"test", "planes", "feasible", "reason", "line_trend", "line_plunge", "friction_angle_deg"}
-	for _, f := range sc.Slope.CrackFill {
-		cols = append(cols, "fs_crack_fill_"+strconv.FormatFloat(f, 'g', -1, 64))
+	cols := []string{"test", "planes", "feasible", "reason", "mode", "plan_view_mode", "line_trend", "line_plunge", "friction_angle_deg"}
+	for _, w := range sc.Slope.Water {
+		cols = append(cols, "fs_water_"+w.String())
 	}
-	rows := [][]string{append(cols, "crack_depth_m", "water_depth_to_fail_m")}
+	cols = append(cols, "crack_depth_m", "water_depth_to_fail_m", "saturated_head_m", "water_table_head_m", "weight_mn", "volume_m3",
+		"trace_a_m", "trace_b_m", "area_a_m2", "area_b_m2", "mode_by_water", "wedge_factor_k", "fs_friction_only",
+		"bolt_to_target_mn_per_m", "bolt_to_target_mn")
+	rows := [][]string{cols}
+	nan := math.NaN()
 	for _, c := range sc.Cases {
 		feasible := "no"
 		if c.Feasible {
 			feasible = "yes"
 		}
-		row := []string{c.Test.String(), sc.Names(c), feasible, words.Reason(sc, c), "", "", Cell(c.Phi)}
+		row := []string{c.Test.String(), sc.Names(c), feasible, words.Reason(sc, c), c.Mode.String(), "", "", "", Cell(c.Phi)}
 		if c.Test == slope.WedgeTest && c.HasLine {
-			row[4], row[5] = Cell(c.Line.Trend), Cell(c.Line.Plunge)
+			row[5], row[6], row[7] = c.PlanView.String(), Cell(c.Line.Trend), Cell(c.Line.Plunge)
 		}
-		for i := range sc.Slope.CrackFill {
-			v := math.NaN()
+		table := nan
+		for i, w := range sc.Slope.Water {
+			v := nan
 			if i < len(c.FS) {
 				v = c.FS[i]
+				if w.Kind == slope.WaterTable {
+					table = c.Heads[i]
+				}
 			}
 			row = append(row, Cell(v))
 		}
-		rows = append(rows, append(row, Cell(c.CrackDepth), Cell(c.WaterToFail)))
+		sat, weight, vol, ta, tb, aa, ab, k, fo := nan, nan, nan, nan, nan, nan, nan, nan, nan
+		var modes []string
+		if c.Test == slope.PlanarTest && c.FS != nil {
+			sat = c.CrackDepth
+		}
+		if w := c.Wedge; w != nil {
+			sat, weight, vol, ta, tb, aa, ab = w.Saturated, w.Weight, w.Volume, w.TraceA, w.TraceB, w.AreaA, w.AreaB
+			for _, m := range c.Modes {
+				modes = append(modes, m.String())
+			}
+		}
+		if c.ShortOK && c.Short.Both {
+			k, fo = c.Short.K, c.Short.FS(sc.Candidates[c.A].Phi, sc.Candidates[c.B].Phi)
+		}
+		boltPlanar, boltWedge := nan, nan
+		if c.Test == slope.PlanarTest {
+			boltPlanar = c.BoltToTarget
+		} else {
+			boltWedge = c.BoltToTarget
+		}
+		row = append(row, Cell(c.CrackDepth), Cell(c.WaterToFail), Cell(sat), Cell(table), Cell(weight), Cell(vol),
+			Cell(ta), Cell(tb), Cell(aa), Cell(ab), strings.Join(modes, ";"), Cell(k), Cell(fo), Cell(boltPlanar), Cell(boltWedge))
+		rows = append(rows, row)
+	}
+	return rows
+}
+
+// SlopeReadings is slope-readings.csv: for each kinematic test, how many
+// readings (pairs of readings for wedges) of each set pass, and their
+// weighted share.
+func SlopeReadings(cs []slope.Count) [][]string {
+	rows := [][]string{{"test", "sets", "tested", "passing", "share", "weighted_share"}}
+	for _, c := range cs {
+		rows = append(rows, []string{c.Test.String(), words.SetsOf(c), strconv.Itoa(c.Tested), strconv.Itoa(c.Pass), Cell(c.Share()), Cell(c.WeightedShare())})
 	}
 	return rows
 }
