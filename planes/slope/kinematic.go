@@ -65,8 +65,11 @@ type Kinematic struct {
 // refined by Hoek & Bray 1981): the plane daylights (dips less than the
 // face's apparent dip in the plane's dip direction), dips at least as
 // steeply as the friction angle phi (degrees), and its dip direction lies
-// within lateral degrees of the face's.
+// within lateral degrees of the face's. A plane whose dip direction is not
+// a reliable reading is tested as dipping towards the face (see Typed), so
+// that it gets one verdict whichever way it was typed.
 func PlanarSliding(p, f planes.Orientation, phi, lateral float64) Kinematic {
+	p = Typed(p, f.DipDirection())
 	k := Kinematic{Phi: phi, Limit: lateral, Dip: p.Dip(), Trend: p.DipDirection(), FaceDip: f.Dip()}
 	k.Offset = azDiff(p.DipDirection(), f.DipDirection())
 	k.FaceApparent = ApparentDip(f, p.DipDirection())
@@ -98,8 +101,14 @@ func PlanarSliding(p, f planes.Orientation, phi, lateral float64) Kinematic {
 // differ (Wyllie & Mah 2004, ch. 7, memory; a both-plane wedge can slide
 // once the line is steeper than the weaker plane's friction angle only if
 // the stronger plane's share of the load is small, so this may flag wedges
-// that the factor of safety then clears). It returns the line (towards the
-// face when horizontal) and false in place of it for parallel planes.
+// that the factor of safety then clears). A plane within
+// planes.NearVertical of vertical or planes.NearHorizontal of horizontal is
+// never the one plane a wedge slides on: gravity has no component along a
+// horizontal plane and none across a vertical one, whose dip vector points
+// straight down (the block would fall, not slide, and rests on the other
+// plane instead); its typed dip direction then plays no part. It returns
+// the line (towards the face when horizontal) and false in place of it for
+// parallel planes.
 func WedgeSliding(a, b, f planes.Orientation, phiA, phiB float64) (geom.Line, bool, Kinematic) {
 	k := Kinematic{Phi: math.Min(phiA, phiB), FaceDip: f.Dip()}
 	l, ok := Intersection(a, b)
@@ -118,10 +127,10 @@ func WedgeSliding(a, b, f planes.Orientation, phiA, phiB float64) (geom.Line, bo
 		k.Fails |= Daylight
 	}
 	mode := WedgeBoth
-	if between(a.DipDirection(), l.Trend, f.DipDirection()) {
+	if hasDipDirection(a) && between(a.DipDirection(), l.Trend, f.DipDirection()) {
 		mode, k.Phi = WedgeOnFirst, phiA
 	}
-	if between(b.DipDirection(), l.Trend, f.DipDirection()) {
+	if hasDipDirection(b) && between(b.DipDirection(), l.Trend, f.DipDirection()) {
 		mode, k.Phi = WedgeOnSecond, phiB
 	}
 	if l.Plunge < k.Phi {
@@ -143,16 +152,35 @@ func WedgeSliding(a, b, f planes.Orientation, phiA, phiB float64) (geom.Line, bo
 //
 // A plane within planes.NearVertical of vertical has no meaningful dip direction:
 // it is tested as dipping either way and passes if either passes, so that a
-// vertical joint typed as 90/030 or 90/210 gets one verdict.
+// vertical joint typed as 90/030 or 90/210 gets one verdict; a plane within
+// planes.NearHorizontal of horizontal is tested as dipping into the face
+// (see Typed).
 func FlexuralToppling(p, f planes.Orientation, phi, lateral float64) Kinematic {
-	k := toppling(p, f, phi, lateral)
-	if p.Dip() >= 90-planes.NearVertical {
-		other := toppling(planes.MustNew(p.Dip(), geom.Azimuth(p.DipDirection()+180)), f, phi, lateral)
-		if other.Feasible || (!k.Feasible && other.Offset < k.Offset) {
-			k = other
-		}
+	return toppling(Typed(p, geom.Azimuth(f.DipDirection()+180)), f, phi, lateral)
+}
+
+// Typed returns p, or, when p's dip direction is not a reliable reading,
+// the same plane typed with the dip direction that lies nearer the azimuth
+// az: a plane within planes.NearVertical of vertical is taken with the
+// nearer of its two dip directions, one within planes.NearHorizontal of
+// horizontal as dipping towards az. A test that asks whether a plane dips
+// towards az then gives it the verdict of its more adverse reading: the
+// cautious choice where the typed direction carries no information.
+func Typed(p planes.Orientation, az float64) planes.Orientation {
+	switch {
+	case p.Dip() <= planes.NearHorizontal:
+		return planes.MustNew(p.Dip(), az)
+	case p.Dip() >= 90-planes.NearVertical && azDiff(p.DipDirection(), az) > 90:
+		return planes.MustNew(p.Dip(), geom.Azimuth(p.DipDirection()+180))
 	}
-	return k
+	return p
+}
+
+// hasDipDirection reports whether p's dip direction is a reliable reading:
+// p is neither within planes.NearHorizontal of horizontal nor within
+// planes.NearVertical of vertical.
+func hasDipDirection(p planes.Orientation) bool {
+	return p.Dip() > planes.NearHorizontal && p.Dip() < 90-planes.NearVertical
 }
 
 func toppling(p, f planes.Orientation, phi, lateral float64) Kinematic {
