@@ -126,3 +126,18 @@ func TestPressureToSlipAtZeroShear(t *testing.T) {
 		t.Errorf("ΔPp %v (opens first %v), FS %v; want %v by opening, no FS", r.PressureToSlip, r.OpensFirst, r.FactorOfSafety, want)
 	}
 }
+
+func TestCutOffAtTheTie(t *testing.T) {
+	// τ = c: the plane reaches its strength as it opens. Derived: the
+	// vertical plane 90/045 under 6 MPa north–south and 4 east–west has its
+	// pole half way between them, σn = 5, τ = (6 − 4)/2 = 1 = c; ΔPp = 5,
+	// by opening, for either dip direction (rounding must not split them).
+	c := &Coulomb{Mu: 0.6, Cohesion: 1}
+	s := insitu.NewState(insitu.Andersonian(6, 4, 5, 0), 200, 0, 1)
+	for _, dd := range []float64{45, 225} {
+		r := Resolve(s, MustNew(90, dd), c)
+		if !scalar.EqualWithinAbs(r.Shear, 1, 1e-12) || !scalar.EqualWithinAbs(r.PressureToSlip, 5, 1e-12) || !r.OpensFirst {
+			t.Errorf("90/%03.0f: τ %v, ΔPp %v, opens first %v; want 1, 5, true", dd, r.Shear, r.PressureToSlip, r.OpensFirst)
+		}
+	}
+}

@@ -61,7 +61,8 @@ type Result struct {
 	// with σn'crit the criterion's CriticalNormal(τ): for Coulomb
 	// min(σn' − (τ − c)/μ, σn')/α. It is negative when the plane is already
 	// past its strength, and never positive for an opening plane (σn' ≤ 0).
-	// The cut-off governs when σn'crit ≤ 0 (cohesion carries τ, or τ = 0):
+	// The cut-off governs when σn'crit ≤ 0 (cohesion carries τ, or τ = 0;
+	// σn'crit within 1e-12 of the largest principal magnitude counts as 0):
 	// see OpensFirst.
 	PressureToSlip float64
 	// OpensFirst is true when the cut-off governs PressureToSlip: the rise
@@ -167,8 +168,10 @@ func ResolveTo(r *Result, s *insitu.State, o *Orientation, c Criterion) {
 		r.DilationTendency = math.Min(1, math.Max(0, (s1-sn)/d))
 	}
 
-	// The tension cut-off: min(σn' − σn'crit, σn').
-	if crit := c.CriticalNormal(tau); crit > 0 {
+	// The tension cut-off: min(σn' − σn'crit, σn'). A σn'crit within
+	// rounding of 0 (τ = c) counts as 0, so that the same plane typed two
+	// ways gets one verdict.
+	if crit := c.CriticalNormal(tau); crit > shearTol*scale {
 		r.PressureToSlip = (en - crit) / s.Biot
 	} else {
 		r.PressureToSlip, r.OpensFirst = en/s.Biot, true

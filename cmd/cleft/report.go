@@ -192,14 +192,14 @@ func slopeReport(sc *slope.Screening, defaults []string) *report.Table {
 
 // tunnelReport is the tunnel screening as the report shows it: the notes of
 // the summary, and a table of each plane or set at the station of the
-// largest tangential stress.
+// largest boundary stress σmax (the station of the largest σmax/UCS).
 func tunnelReport(sc *tunnel.Screening, defaults []string) *report.Table {
 	notes := words.TunnelLines(sc)
 	if len(defaults) > 0 {
 		notes = append(notes, "Defaults applied: "+strings.Join(defaults, "; ")+".")
 	}
 	w := sc.Stations[sc.Worst()]
-	notes = append(notes, fmt.Sprintf("At the station of the largest tangential stress, chainage %g m (axis %.0f m deep; every station is in stations.csv, wall.csv and profile.csv):", w.Chainage, w.Depth))
+	notes = append(notes, fmt.Sprintf("At the station of the largest boundary stress σmax, chainage %g m (axis %.0f m deep; every station is in stations.csv, wall.csv and profile.csv):", w.Chainage, w.Depth))
 	t := &report.Table{Notes: notes,
 		Columns: []string{"plane or set", "strike to axis °", "drive", "class", "Ts", "FS", "ΔPp to slip", "wall critical °", "wall opening °"},
 		Numeric: []bool{false, true, false, false, true, true, true, false, false}}
