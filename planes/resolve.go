@@ -61,9 +61,9 @@ type Result struct {
 	// with σn'crit the criterion's CriticalNormal(τ): for Coulomb
 	// min(σn' − (τ − c)/μ, σn')/α. It is negative when the plane is already
 	// past its strength, and never positive for an opening plane (σn' ≤ 0).
-	// The cut-off governs when σn'crit ≤ 0 (cohesion carries τ, or τ = 0;
-	// σn'crit within 1e-12 of the largest principal magnitude counts as 0):
-	// see OpensFirst.
+	// The cut-off governs when σn'crit ≤ 0 (cohesion carries τ, or τ = 0; a
+	// σn'crit below 1e-12 times the largest principal magnitude counts as
+	// 0): see OpensFirst.
 	PressureToSlip float64
 	// OpensFirst is true when the cut-off governs PressureToSlip: the rise
 	// opens the plane before its shear strength is reached (σn'crit ≤ 0), so
