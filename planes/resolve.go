@@ -4,7 +4,6 @@ import (
 	"math"
 
 	"cleft/insitu"
-	"cleft/insitu/geom"
 
 	"gonum.org/v1/gonum/spatial/r3"
 )
@@ -143,7 +142,7 @@ func ResolveTo(r *Result, s *insitu.State, o *Orientation, c Criterion) {
 			x, y = -x, -y // the east (or north) block, not the typed hanging wall
 		}
 		if h2 := x*x + y*y; h2 > 1e-18*tau*tau {
-			r.SlipTrend = geom.Azimuth(math.Atan2(y, x) * (180 / math.Pi))
+			r.SlipTrend = trendDeg(y, x)
 		}
 	} else {
 		tau = 0
@@ -185,4 +184,17 @@ func ResolveTo(r *Result, s *insitu.State, o *Orientation, c Criterion) {
 	default:
 		r.State = Stable
 	}
+}
+
+// trendDeg returns atan2(y, x) as an azimuth in degrees, [0, 360), without
+// the math.Mod of geom.Azimuth (the hot path of Resolve).
+func trendDeg(y, x float64) float64 {
+	a := math.Atan2(y, x) * (180 / math.Pi)
+	if a < 0 {
+		a += 360
+		if a >= 360 { // a tiny negative angle rounds up to 360
+			a = 0
+		}
+	}
+	return a + 0 // no negative zero
 }
