@@ -87,7 +87,7 @@ func reportState(st insitu.State, mu float64) report.State {
 func (a *screened) planeTable() (*report.Table, bool) {
 	t := &report.Table{Columns: []string{"plane", "dip/dip dir.", "depth m", "σn'", "τ", "Ts", "Td", "FS", "ΔPp to slip", "rake °", "slip trend °", "sense", "state"},
 		Numeric: []bool{false, true, true, true, true, true, true, true, true, true, true, false, false},
-		NoWrap:  []bool{12: true}}
+		NoWrap:  []bool{0: true, 12: true}}
 	setCol := -1
 	for i, n := range a.Extras {
 		if n == "set" {
