@@ -15,5 +15,12 @@
 // in Aki & Richards (1980). A value that is undefined for a plane is NaN in
 // Result; writers print it as an empty cell or null, never as a number.
 //
+// The pressure to slip has a tension cut-off: it is never more than the rise
+// that opens the plane, so an opening plane never has a positive one. A plane
+// within NearVertical of vertical, or NearHorizontal of horizontal, gets the
+// same verdicts whichever dip direction was typed: its dip-slip is named by
+// the side that goes up (Side), not normal or reverse, and a horizontal plane
+// has no rake or sense, only the slip trend of its upper block.
+//
 // Everything here is a pure function over values: no I/O.
 package planes

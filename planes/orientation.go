@@ -30,6 +30,13 @@ type Orientation struct {
 // accuracy of a compass reading).
 const NearVertical = 1.0
 
+// NearHorizontal is the tolerance, degrees, within which a plane counts as
+// horizontal: its dip direction, and so its strike, is then not a reliable
+// reading, and nothing that depends on them is reported (the rake and slip
+// sense) or judged (the slope tests take it as dipping the way that matters).
+// This tool's choice, as for NearVertical: 1°.
+const NearHorizontal = 1.0
+
 // The vectors of the zero value, the plane 0/000.
 var (
 	zeroPole   = r3.Vec{Z: 1}

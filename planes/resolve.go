@@ -51,17 +51,42 @@ type Result struct {
 	// FactorOfSafety is strength(σn')/τ; NaN when σn' ≤ 0 (opening) or τ = 0.
 	FactorOfSafety float64
 	// PressureToSlip is the rise in pore pressure that brings the plane to its
-	// strength, (σn' − σn'crit)/α with σn'crit the criterion's CriticalNormal(τ):
-	// for Coulomb (σn' − (τ − c)/μ)/α. Negative when the plane is already past
-	// its strength. With no shear (τ = 0) it is the rise that takes the
-	// strength to zero: for a cohesionless plane, the pressure that opens it.
+	// strength, with a tension cut-off: a plane that opens (σn' = 0) first
+	// has no strength left, so the rise is never more than the one that
+	// opens it,
+	//
+	//	ΔPp = min(σn' − σn'crit, σn') / α
+	//
+	// with σn'crit the criterion's CriticalNormal(τ): for Coulomb
+	// min(σn' − (τ − c)/μ, σn')/α. It is negative when the plane is already
+	// past its strength, and never positive for an opening plane (σn' ≤ 0).
+	// The cut-off governs when σn'crit ≤ 0 (cohesion carries τ, or τ = 0; a
+	// σn'crit below 1e-12 times the largest principal magnitude counts as
+	// 0): see OpensFirst.
 	PressureToSlip float64
+	// OpensFirst is true when the cut-off governs PressureToSlip: the rise
+	// opens the plane before its shear strength is reached (σn'crit ≤ 0), so
+	// ΔPp = σn'/α.
+	OpensFirst bool
 	// Rake of the hanging-wall slip, parallel to the resolved shear traction
 	// (Wallace 1951; Bott 1959), measured in the plane from the strike (Aki &
 	// Richards 1980): (−180, 180], +90 reverse, −90 normal, 0 sinistral, 180
-	// dextral. NaN when τ = 0.
+	// dextral. NaN when τ = 0, and for a plane within NearHorizontal of
+	// horizontal (whose strike is not a reliable reading).
 	Rake float64
-	// Sense is the slip sense read from Rake.
+	// SlipTrend is the azimuth, degrees in [0, 360), towards which the
+	// hanging wall moves: the trend of its slip vector (the horizontal
+	// direction of the resolved shear traction on the hanging wall's face).
+	// On a plane within NearHorizontal of horizontal the hanging wall is the
+	// upper block. A plane within NearVertical of vertical has no block
+	// above it: the trend is that of the block on the side facing an
+	// azimuth in [0, 180) (the east side; the north side of an east–west
+	// plane), whichever dip direction was typed. NaN when τ = 0 or the slip
+	// is vertical (pure dip-slip on a vertical plane).
+	SlipTrend float64
+	// Sense is the slip sense read from Rake (SenseOf), or for a plane
+	// within NearVertical of vertical from Rake and the side that goes up
+	// (VerticalSenseOf); NoSlip when Rake is NaN.
 	Sense Sense
 	// State is opening (σn' ≤ 0), critical (FS ≤ 1) or stable.
 	State PlaneState
@@ -98,13 +123,27 @@ func ResolveTo(r *Result, s *insitu.State, o *Orientation, c Criterion) {
 	scale := math.Max(math.Abs(s1), math.Abs(s3))
 
 	nan := math.NaN()
-	r.Rake, r.Sense = nan, NoSlip
+	r.Rake, r.SlipTrend, r.Sense = nan, nan, NoSlip
 	if tau > shearTol*scale {
-		r.Rake = math.Atan2(r3.Dot(sv, o.UpDip()), r3.Dot(sv, o.StrikeVec())) * (180 / math.Pi)
-		if r.Rake == -180 {
-			r.Rake = 180
+		dip := o.Dip()
+		if dip > NearHorizontal {
+			r.Rake = math.Atan2(r3.Dot(sv, o.UpDip()), r3.Dot(sv, o.StrikeVec())) * (180 / math.Pi)
+			if r.Rake == -180 {
+				r.Rake = 180
+			}
+			if dip >= 90-NearVertical {
+				r.Sense = VerticalSenseOf(r.Rake, o.DipDirection())
+			} else {
+				r.Sense = SenseOf(r.Rake)
+			}
 		}
-		r.Sense = SenseOf(r.Rake)
+		x, y := sv.X, sv.Y
+		if dip >= 90-NearVertical && o.DipDirection() >= 180 {
+			x, y = -x, -y // the east (or north) block, not the typed hanging wall
+		}
+		if h2 := x*x + y*y; h2 > 1e-18*tau*tau {
+			r.SlipTrend = trendDeg(y, x)
+		}
 	} else {
 		tau = 0
 	}
@@ -128,7 +167,14 @@ func ResolveTo(r *Result, s *insitu.State, o *Orientation, c Criterion) {
 		r.DilationTendency = math.Min(1, math.Max(0, (s1-sn)/d))
 	}
 
-	r.PressureToSlip = (en - c.CriticalNormal(tau)) / s.Biot
+	// The tension cut-off: min(σn' − σn'crit, σn'). A σn'crit within
+	// rounding of 0 (τ = c) counts as 0, so that the same plane typed two
+	// ways gets one verdict.
+	if crit := c.CriticalNormal(tau); crit > shearTol*scale {
+		r.PressureToSlip = (en - crit) / s.Biot
+	} else {
+		r.PressureToSlip, r.OpensFirst = en/s.Biot, true
+	}
 
 	switch {
 	case en <= 0:
@@ -138,4 +184,17 @@ func ResolveTo(r *Result, s *insitu.State, o *Orientation, c Criterion) {
 	default:
 		r.State = Stable
 	}
+}
+
+// trendDeg returns atan2(y, x) as an azimuth in degrees, [0, 360), without
+// the math.Mod of geom.Azimuth (the hot path of Resolve).
+func trendDeg(y, x float64) float64 {
+	a := math.Atan2(y, x) * (180 / math.Pi)
+	if a < 0 {
+		a += 360
+		if a >= 360 { // a tiny negative angle rounds up to 360
+			a = 0
+		}
+	}
+	return a + 0 // no negative zero
 }

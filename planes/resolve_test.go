@@ -264,19 +264,24 @@ func TestDegenerateStates(t *testing.T) {
 }
 
 func TestCoulombPressureToSlip(t *testing.T) {
-	// The closed form of the issue: ΔPp = σn' − (τ − c)/μ (α = 1); after that
-	// rise the factor of safety is exactly 1.
+	// The closed form of issue 11: ΔPp = min(σn' − (τ − c)/μ, σn') (α = 1);
+	// after that rise the factor of safety is exactly 1, or, when the
+	// tension cut-off governs, the plane has just opened (σn' = 0).
 	rng := rand.New(rand.NewPCG(21, 22))
 	for range 1000 {
 		s := dryState(randomTensor(rng))
 		c := &Coulomb{Mu: 0.4 + rng.Float64()*0.6, Cohesion: rng.Float64()}
 		o := MustNew(rng.Float64()*90, rng.Float64()*360)
 		r := Resolve(s, o, c)
-		if want := r.EffectiveNormal - (r.Shear-c.Cohesion)/c.Mu; !scalar.EqualWithinAbs(r.PressureToSlip, want, 1e-10) {
+		if want := math.Min(r.EffectiveNormal-(r.Shear-c.Cohesion)/c.Mu, r.EffectiveNormal); !scalar.EqualWithinAbs(r.PressureToSlip, want, 1e-10) {
 			t.Fatalf("ΔPp = %v, want %v", r.PressureToSlip, want)
 		}
 		s.PorePressure = r.PressureToSlip
-		if q := Resolve(s, o, c); q.EffectiveNormal > 0 && !scalar.EqualWithinAbs(q.FactorOfSafety, 1, 1e-9) {
+		q := Resolve(s, o, c)
+		switch {
+		case r.OpensFirst && !scalar.EqualWithinAbs(q.EffectiveNormal, 0, 1e-10):
+			t.Fatalf("after ΔPp with the cut-off, σn' = %v, want 0", q.EffectiveNormal)
+		case !r.OpensFirst && q.EffectiveNormal > 0 && !scalar.EqualWithinAbs(q.FactorOfSafety, 1, 1e-9):
 			t.Fatalf("after ΔPp, FS = %v, want 1", q.FactorOfSafety)
 		}
 	}

@@ -162,6 +162,9 @@ func (m *Mohr) plot() *plot.Plot {
 	if i := m.critical(); i >= 0 {
 		q := m.Points[i]
 		label := fmt.Sprintf("%s: a rise of %.2f MPa in Pp brings it to slip", q.Name, q.Result.PressureToSlip)
+		if q.Result.OpensFirst {
+			label = fmt.Sprintf("%s: a rise of %.2f MPa in Pp opens it (its cohesion carries τ)", q.Name, q.Result.PressureToSlip)
+		}
 		if q.Result.PressureToSlip < 0 {
 			label = fmt.Sprintf("%s: past its strength; Pp %.2f MPa lower would hold it", q.Name, -q.Result.PressureToSlip)
 		}

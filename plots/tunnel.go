@@ -114,7 +114,7 @@ func (t *TunnelProfile) Draw(c draw.Canvas) {
 
 	ratio := plot.New()
 	axisStyle(ratio)
-	ratio.Y.Label.Text = "σθ,max / UCS"
+	ratio.Y.Label.Text = "σmax / UCS"
 	ratio.X.Min, ratio.X.Max, ratio.Y.Min = lo, hi, 0
 	maxR := 0.6
 	for _, r := range t.Ratio {
@@ -215,7 +215,14 @@ type TunnelWall struct {
 	UCS    float64
 	Sets   []WallSet
 	Radius float64 // of the opening, m (for the caption only)
+	// ThetaMax and WallMax are the exact peaks of σθ and of the largest wall
+	// principal stress σmax (stress MPa, angle ° from the crown in
+	// [0, 180)), named in the key; Stress 0 leaves a line out.
+	ThetaMax, WallMax WallPeak
 }
+
+// WallPeak is a peak stress round the wall and where it occurs.
+type WallPeak struct{ Stress, At float64 }
 
 // Draw draws the figure on c.
 func (t *TunnelWall) Draw(c draw.Canvas) {
@@ -287,18 +294,15 @@ func (t *TunnelWall) Draw(c draw.Canvas) {
 	y -= vg.Points(18)
 	note := textStyle(7.5, false, ink)
 	note.YAlign = draw.YCenter
-	maxI := 0
-	for k, v := range t.Sigma {
-		if v > t.Sigma[maxI] {
-			maxI = k
-		}
+	keys := []string{"curve: σθ round the wall, compression outward"}
+	if p := t.ThetaMax; p.Stress != 0 {
+		keys = append(keys, fmt.Sprintf("largest σθ %.1f MPa at %.0f° and %.0f°", p.Stress, p.At, p.At+180))
 	}
-	for _, txt := range []string{
-		"curve: σθ round the wall, compression outward",
-		fmt.Sprintf("largest σθ %.1f MPa at %g°, %.2f of the UCS", t.Sigma[maxI], float64(maxI)*t.Step, t.Sigma[maxI]/t.UCS),
-		fmt.Sprintf("scale: %.1f MPa from the wall to the outermost point", peak),
-		"rings: one per plane or set, outward in the key's order",
-	} {
+	if p := t.WallMax; p.Stress != 0 {
+		keys = append(keys, fmt.Sprintf("largest wall stress σmax %.1f MPa at %.0f°, %.2f of the UCS", p.Stress, p.At, p.Stress/t.UCS))
+	}
+	keys = append(keys, fmt.Sprintf("scale: %.1f MPa from the wall to the outermost point", peak), "rings: one per plane or set, outward in the key's order")
+	for _, txt := range keys {
 		c.FillText(note, vg.Point{X: x, Y: y}, txt)
 		y -= vg.Points(13)
 	}

@@ -141,7 +141,7 @@ func TestAssessExample(t *testing.T) {
 	// safety are empty cells and JSON nulls.
 	for i, r := range rows {
 		if r[0] == "F2" {
-			if r[15] != "opening" || r[8] != "" || r[11] != "" {
+			if r[16] != "opening" || r[8] != "" || r[11] != "" {
 				t.Errorf("F2 row %v: want opening with empty Ts and FS", r)
 			}
 			if js[i-1]["slip_tendency"] != nil || js[i-1]["factor_of_safety"] != nil {

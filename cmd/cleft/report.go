@@ -88,9 +88,9 @@ func reportState(st insitu.State, mu float64) report.State {
 // planeTable is the plane table, least stable first, grouped by set (sets in
 // order of their least stable plane) when the planes carry a set column.
 func (a *screened) planeTable() (*report.Table, bool) {
-	t := &report.Table{Columns: []string{"plane", "dip/dip dir.", "depth m", "σn'", "τ", "Ts", "Td", "FS", "ΔPp to slip", "rake °", "sense", "state"},
-		Numeric: []bool{false, true, true, true, true, true, true, true, true, true, false, false},
-		NoWrap:  []bool{11: true}}
+	t := &report.Table{Columns: []string{"plane", "dip/dip dir.", "depth m", "σn'", "τ", "Ts", "Td", "FS", "ΔPp to slip", "rake °", "slip trend °", "sense", "state"},
+		Numeric: []bool{false, true, true, true, true, true, true, true, true, true, true, false, false},
+		NoWrap:  []bool{0: true, 12: true}}
 	setCol := -1
 	for i, n := range a.Extras {
 		if n == "set" {
@@ -106,7 +106,7 @@ func (a *screened) planeTable() (*report.Table, bool) {
 			sense = "—"
 		}
 		row := report.Row{Class: res.State.String(), Cells: []string{p.Name, p.Orientation.String(), words.Num(p.Depth), words.Fixed(res.EffectiveNormal, 3), words.Fixed(res.Shear, 3),
-			words.Fixed(res.SlipTendency, 3), words.Fixed(res.DilationTendency, 3), words.Fixed(res.FactorOfSafety, 2), words.Fixed(res.PressureToSlip, 2), words.Rake(res.Rake), sense, words.StateLabel(res.State)}}
+			words.Fixed(res.SlipTendency, 3), words.Fixed(res.DilationTendency, 3), words.Fixed(res.FactorOfSafety, 2), words.Fixed(res.PressureToSlip, 2), words.Rake(res.Rake), words.Trend(res.SlipTrend), sense, words.StateLabel(res.State)}}
 		set := ""
 		if setCol >= 0 {
 			set = p.Extras[setCol]
@@ -144,7 +144,7 @@ func (a *screened) setsTable() *report.Table {
 		r, f := st.Result, st.Set.Raw
 		pole := f.MeanPole()
 		t.Rows = append(t.Rows, report.Row{Class: r.State.String(), Cells: []string{st.Name, fmt.Sprint(len(st.Set.Members)), words.Fixed(st.Set.WeightedCount, 1),
-			f.MeanPlane().String(), fmt.Sprintf("%03.0f/%02.0f", pole.Trend, pole.Plunge), words.Fixed(f.K, 1), words.Fixed(f.Alpha, 1), words.Fixed(st.Set.Tensor.WoodcockK(), 2),
+			f.MeanPlane().String(), fmt.Sprintf("%03.0f/%02.0f", pole.Trend, pole.Plunge), words.Fixed(f.K, 1), words.Fixed(f.Alpha, 1), words.Fixed(st.Set.RawTensor.WoodcockK(), 2),
 			words.Num(st.Plane.Depth), words.Fixed(r.EffectiveNormal, 3), words.Fixed(r.Shear, 3), words.Fixed(r.SlipTendency, 3), words.Fixed(r.FactorOfSafety, 2),
 			words.Fixed(r.PressureToSlip, 2), words.StateLabel(r.State)}})
 	}
@@ -236,14 +236,14 @@ func slopeReadingsReport(counts []slope.Count) *report.Table {
 
 // tunnelReport is the tunnel screening as the report shows it: the notes of
 // the summary, and a table of each plane or set at the station of the
-// largest tangential stress.
+// largest boundary stress σmax (the station of the largest σmax/UCS).
 func tunnelReport(sc *tunnel.Screening, defaults []string) *report.Table {
 	notes := words.TunnelLines(sc)
 	if len(defaults) > 0 {
 		notes = append(notes, "Defaults applied: "+strings.Join(defaults, "; ")+".")
 	}
 	w := sc.Stations[sc.Worst()]
-	notes = append(notes, fmt.Sprintf("At the station of the largest tangential stress, chainage %g m (axis %.0f m deep; every station is in stations.csv, wall.csv and profile.csv):", w.Chainage, w.Depth))
+	notes = append(notes, fmt.Sprintf("At the station of the largest boundary stress σmax, chainage %g m (axis %.0f m deep; every station is in stations.csv, wall.csv and profile.csv):", w.Chainage, w.Depth))
 	t := &report.Table{Notes: notes,
 		Columns: []string{"plane or set", "strike to axis °", "drive", "class", "Ts", "FS", "ΔPp to slip", "wall critical °", "wall opening °"},
 		Numeric: []bool{false, true, false, false, true, true, true, false, false}}

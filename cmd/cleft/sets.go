@@ -148,7 +148,7 @@ func printSets(b *strings.Builder, g *sets.Grouping) {
 	for k, s := range an.Sets {
 		m := s.Raw.MeanPlane()
 		p := m.Pole()
-		fmt.Fprintf(b, "%-11s %6d %9.1f %11s %03.0f/%02.0f %8.1f %7.1f %9.2f\n", sets.Name(k), len(s.Members), s.WeightedCount, m, p.Trend, p.Plunge, s.Raw.K, s.Raw.Alpha, s.Tensor.WoodcockK())
+		fmt.Fprintf(b, "%-11s %6d %9.1f %11s %03.0f/%02.0f %8.1f %7.1f %9.2f\n", sets.Name(k), len(s.Members), s.WeightedCount, m, p.Trend, p.Plunge, s.Raw.K, s.Raw.Alpha, s.RawTensor.WoodcockK())
 	}
 	fmt.Fprintf(b, "%-11s %6d %9.1f\n", "unassigned", an.Unassigned, an.UnassignedWeight)
 }

@@ -131,11 +131,13 @@ func tunnelFigures(s *site.Site, sc *tunnel.Screening, idx int) []*namedFigure {
 	}
 	ts := sc.Stations[idx]
 	wall := &plots.TunnelWall{
-		Site:   s.Name,
-		Lines:  []string{fmt.Sprintf("Wall of the opening at chainage %g m: cover %.0f m, axis at %.0f m, drive %03.0f/%.1f, looking along the drive", ts.Chainage, ts.Cover, ts.Depth, ts.Trend, ts.Plunge)},
-		Step:   tunnel.PerimeterStep,
-		UCS:    t.UCS,
-		Radius: t.Radius,
+		Site:     s.Name,
+		Lines:    []string{fmt.Sprintf("Wall of the opening at chainage %g m: cover %.0f m, axis at %.0f m, drive %03.0f/%.1f, looking along the drive", ts.Chainage, ts.Cover, ts.Depth, ts.Trend, ts.Plunge)},
+		Step:     tunnel.PerimeterStep,
+		UCS:      t.UCS,
+		Radius:   t.Radius,
+		ThetaMax: plots.WallPeak{Stress: ts.ThetaMax.Stress, At: ts.ThetaMax.Theta},
+		WallMax:  plots.WallPeak{Stress: ts.WallMax.Stress, At: ts.WallMax.Theta},
 	}
 	for _, w := range ts.Wall {
 		wall.Sigma = append(wall.Sigma, w.Theta)
@@ -151,7 +153,7 @@ func tunnelFigures(s *site.Site, sc *tunnel.Screening, idx int) []*namedFigure {
 	return []*namedFigure{
 		{file: "tunnel-profile",
 			title:   "Along the tunnel alignment",
-			caption: "Top: cover above the crown. Middle: the largest tangential stress at the wall against the UCS, with the band of the onset of spalling, 0.4 ± 0.1 (Martin, Kaiser & McCreath 1999). Bottom: far-field factor of safety of each plane or set at the axis depth, each with its own strength (values above 4 are drawn at 4); the dotted red line is FS = 1. Shading: stretches where a plane is critical or opening in the far field (darker) or slips or opens somewhere on the wall (lighter).",
+			caption: "Top: cover above the crown. Middle: the largest boundary stress σmax at the wall (σθ with σz and τθz) against the UCS, with the band of the onset of spalling, 0.4 ± 0.1 (Martin, Kaiser & McCreath 1999). Bottom: far-field factor of safety of each plane or set at the axis depth, each with its own strength (values above 4 are drawn at 4); the dotted red line is FS = 1. Shading: stretches where a plane is critical or opening in the far field (darker) or slips or opens somewhere on the wall (lighter).",
 			fig:     pr, w: cm(19, 0), h: cm(17, 0)},
 		{file: "tunnel-wall",
 			title:   fmt.Sprintf("Wall of the opening at chainage %g m", ts.Chainage),

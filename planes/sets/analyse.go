@@ -22,7 +22,8 @@ type Set struct {
 	WeightedCount float64 // Σ of the members' weights
 	Raw           FisherStats
 	Weighted      FisherStats // with the weights (equal to Raw without them)
-	Tensor        Eigen       // of the members, weighted
+	RawTensor     Eigen       // orientation tensor of the members, unweighted
+	Tensor        Eigen       // of the members, weighted (equal to RawTensor without weights)
 }
 
 // Mean returns the set's mean plane (from the raw Fisher mean).
@@ -45,7 +46,8 @@ type Analysis struct {
 
 // Analyse groups the poles into sets (Cluster, with ChooseK when
 // neither K nor seeds are given) and computes each set's Fisher statistics,
-// raw and weighted, and its orientation tensor. weights may be nil.
+// raw and weighted, and its orientation tensor, raw and weighted. weights
+// may be nil.
 func Analyse(poles []r3.Vec, weights []float64, o Options) Analysis {
 	var a Analysis
 	co := ClusterOptions{K: o.K, Seeds: o.Seeds, MaxAngle: o.MaxAngle, Weights: weights}
@@ -102,6 +104,7 @@ func Analyse(poles []r3.Vec, weights []float64, o Options) Analysis {
 		}
 		s.Raw = Fisher(ps, nil)
 		s.Weighted = Fisher(ps, ws)
+		s.RawTensor = OrientationTensor(ps, nil)
 		s.Tensor = OrientationTensor(ps, ws)
 		kept = append(kept, s)
 	}

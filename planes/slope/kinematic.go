@@ -94,8 +94,11 @@ type Kinematic struct {
 // refined by Hoek & Bray 1981): the plane daylights (dips less than the
 // face's apparent dip in the plane's dip direction), dips at least as
 // steeply as the friction angle phi (degrees), and its dip direction lies
-// within lateral degrees of the face's.
+// within lateral degrees of the face's. A plane whose dip direction is not
+// a reliable reading is tested as dipping towards the face (see Typed), so
+// that it gets one verdict whichever way it was typed.
 func PlanarSliding(p, f planes.Orientation, phi, lateral float64) Kinematic {
+	p = Typed(p, f.DipDirection())
 	k := Kinematic{Phi: phi, Limit: lateral, Dip: p.Dip(), Trend: p.DipDirection(), FaceDip: f.Dip()}
 	k.Offset = azDiff(p.DipDirection(), f.DipDirection())
 	k.FaceApparent = ApparentDip(f, p.DipDirection())
@@ -132,7 +135,9 @@ func PlanarSliding(p, f planes.Orientation, phi, lateral float64) Kinematic {
 // down the dip of the other plane, which must dip at least that plane's φ.
 // The plan-view rule (a plane slides alone when its dip direction lies
 // between the line's trend and the face's dip direction; Hoek & Bray 1981)
-// is kept in Kinematic.PlanView; it does not decide.
+// is kept in Kinematic.PlanView; it does not decide (and takes no side for
+// a plane within planes.NearVertical of vertical or planes.NearHorizontal
+// of horizontal, whose typed dip direction means nothing).
 //
 // It returns the line (towards the face when horizontal) and false in place
 // of it for parallel planes.
@@ -154,10 +159,10 @@ func WedgeSliding(a, b, f planes.Orientation, phiA, phiB float64) (geom.Line, bo
 		k.Fails |= Daylight
 	}
 	k.PlanView = WedgeBoth
-	if between(a.DipDirection(), l.Trend, f.DipDirection()) {
+	if hasDipDirection(a) && between(a.DipDirection(), l.Trend, f.DipDirection()) {
 		k.PlanView = WedgeOnFirst
 	}
-	if between(b.DipDirection(), l.Trend, f.DipDirection()) {
+	if hasDipDirection(b) && between(b.DipDirection(), l.Trend, f.DipDirection()) {
 		k.PlanView = WedgeOnSecond
 	}
 	mode := WeightMode(a, b, f)
@@ -187,16 +192,35 @@ func WedgeSliding(a, b, f planes.Orientation, phiA, phiB float64) (geom.Line, bo
 //
 // A plane within planes.NearVertical of vertical has no meaningful dip direction:
 // it is tested as dipping either way and passes if either passes, so that a
-// vertical joint typed as 90/030 or 90/210 gets one verdict.
+// vertical joint typed as 90/030 or 90/210 gets one verdict; a plane within
+// planes.NearHorizontal of horizontal is tested as dipping into the face
+// (see Typed).
 func FlexuralToppling(p, f planes.Orientation, phi, lateral float64) Kinematic {
-	k := toppling(p, f, phi, lateral)
-	if p.Dip() >= 90-planes.NearVertical {
-		other := toppling(planes.MustNew(p.Dip(), geom.Azimuth(p.DipDirection()+180)), f, phi, lateral)
-		if other.Feasible || (!k.Feasible && other.Offset < k.Offset) {
-			k = other
-		}
+	return toppling(Typed(p, geom.Azimuth(f.DipDirection()+180)), f, phi, lateral)
+}
+
+// Typed returns p, or, when p's dip direction is not a reliable reading,
+// the same plane typed with the dip direction that lies nearer the azimuth
+// az: a plane within planes.NearVertical of vertical is taken with the
+// nearer of its two dip directions, one within planes.NearHorizontal of
+// horizontal as dipping towards az. A test that asks whether a plane dips
+// towards az then gives it the verdict of its more adverse reading: the
+// cautious choice where the typed direction carries no information.
+func Typed(p planes.Orientation, az float64) planes.Orientation {
+	switch {
+	case p.Dip() <= planes.NearHorizontal:
+		return planes.MustNew(p.Dip(), az)
+	case p.Dip() >= 90-planes.NearVertical && azDiff(p.DipDirection(), az) > 90:
+		return planes.MustNew(p.Dip(), geom.Azimuth(p.DipDirection()+180))
 	}
-	return k
+	return p
+}
+
+// hasDipDirection reports whether p's dip direction is a reliable reading:
+// p is neither within planes.NearHorizontal of horizontal nor within
+// planes.NearVertical of vertical.
+func hasDipDirection(p planes.Orientation) bool {
+	return p.Dip() > planes.NearHorizontal && p.Dip() < 90-planes.NearVertical
 }
 
 func toppling(p, f planes.Orientation, phi, lateral float64) Kinematic {

@@ -81,7 +81,7 @@ const (
 //
 // A dip of exactly 20° or 45° belongs to the steeper band.
 type DriveClass struct {
-	StrikeToAxis float64 // angle between strike and tunnel axis, degrees, [0, 90]
+	StrikeToAxis float64 // angle between strike and tunnel axis, degrees, [0, 90]; NaN within planes.NearHorizontal of horizontal (no strike)
 	Drive        Drive
 	Class        Class
 	Band         Band
@@ -96,6 +96,9 @@ func ClassifyDrive(o planes.Orientation, trend float64) DriveClass {
 	d := math.Abs(math.Remainder(o.Strike()-trend, 360))
 	if d > 90 {
 		d = 180 - d
+	}
+	if o.Dip() <= planes.NearHorizontal {
+		d = math.NaN() // a horizontal plane has no strike to set against the axis
 	}
 	if o.Dip() < 20 {
 		return DriveClass{StrikeToAxis: d, Class: Fair, Band: Flat}

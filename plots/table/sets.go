@@ -10,12 +10,13 @@ import (
 
 // SetColumns are the columns of sets.csv.
 var SetColumns = []string{"set", "count", "weighted_count", "mean_dip", "mean_dip_direction", "fisher_k", "alpha95_deg",
-	"spherical_variance", "woodcock_k", "woodcock_c", "weighted_mean_dip", "weighted_mean_dip_direction", "weighted_fisher_k", "weighted_alpha95_deg"}
+	"spherical_variance", "woodcock_k", "woodcock_c", "weighted_mean_dip", "weighted_mean_dip_direction", "weighted_fisher_k", "weighted_alpha95_deg",
+	"weighted_woodcock_k", "weighted_woodcock_c"}
 
 // SetStressColumns follow SetColumns in the sets.csv of an assessment: the
 // stress on each set's mean plane at the median depth of its readings.
 var SetStressColumns = []string{"depth_m", "effective_normal_stress_mpa", "shear_stress_mpa", "slip_tendency",
-	"dilation_tendency", "factor_of_safety", "pressure_to_slip_mpa", "rake_deg", "slip_sense", "state"}
+	"dilation_tendency", "factor_of_safety", "pressure_to_slip_mpa", "rake_deg", "slip_trend_deg", "slip_sense", "state"}
 
 // SetRows are the rows of sets.csv under its header: one per set, then the
 // unassigned readings.
@@ -25,8 +26,8 @@ func SetRows(g *sets.Grouping) [][]string {
 	for k, s := range an.Sets {
 		m, wm := s.Raw.MeanPlane(), s.Weighted.MeanPlane()
 		rows = append(rows, []string{sets.Name(k), fmt.Sprint(len(s.Members)), Cell(s.WeightedCount), Cell(m.Dip()), Cell(m.DipDirection()),
-			Cell(s.Raw.K), Cell(s.Raw.Alpha), Cell(s.Raw.SphVar), Cell(s.Tensor.WoodcockK()), Cell(s.Tensor.WoodcockC()),
-			Cell(wm.Dip()), Cell(wm.DipDirection()), Cell(s.Weighted.K), Cell(s.Weighted.Alpha)})
+			Cell(s.Raw.K), Cell(s.Raw.Alpha), Cell(s.Raw.SphVar), Cell(s.RawTensor.WoodcockK()), Cell(s.RawTensor.WoodcockC()),
+			Cell(wm.Dip()), Cell(wm.DipDirection()), Cell(s.Weighted.K), Cell(s.Weighted.Alpha), Cell(s.Tensor.WoodcockK()), Cell(s.Tensor.WoodcockC())})
 	}
 	un := make([]string, len(SetColumns))
 	un[0], un[1], un[2] = "unassigned", fmt.Sprint(an.Unassigned), Cell(an.UnassignedWeight)
@@ -46,7 +47,7 @@ func AssessedSets(a *assess.Assessment) [][]string {
 	for k, st := range a.Sets {
 		r := st.Result
 		rows = append(rows, append(stats[k], Cell(st.Plane.Depth), Cell(r.EffectiveNormal), Cell(r.Shear), Cell(r.SlipTendency),
-			Cell(r.DilationTendency), Cell(r.FactorOfSafety), Cell(r.PressureToSlip), Cell(r.Rake), r.Sense.String(), r.State.String()))
+			Cell(r.DilationTendency), Cell(r.FactorOfSafety), Cell(r.PressureToSlip), Cell(r.Rake), Cell(r.SlipTrend), r.Sense.String(), r.State.String()))
 	}
 	un := stats[len(stats)-1]
 	return append(rows, append(un, make([]string, len(SetStressColumns))...))

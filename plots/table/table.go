@@ -18,7 +18,7 @@ var Columns = []string{
 	"name", "dip", "dip_direction", "depth_m", "pore_pressure_mpa",
 	"normal_stress_mpa", "shear_stress_mpa", "effective_normal_stress_mpa",
 	"slip_tendency", "slip_tendency_normalised", "dilation_tendency",
-	"factor_of_safety", "pressure_to_slip_mpa", "rake_deg", "slip_sense", "state",
+	"factor_of_safety", "pressure_to_slip_mpa", "rake_deg", "slip_trend_deg", "slip_sense", "state",
 }
 
 // Format is CSV or JSON.
@@ -85,7 +85,7 @@ func AppendRow(b []byte, f Format, p *site.Plane, r *planes.Result, extras []str
 	nums := [...]float64{o.Dip(), o.DipDirection(), p.Depth, r.PorePressure,
 		r.Normal, r.Shear, r.EffectiveNormal,
 		r.SlipTendency, r.NormalisedSlip, r.DilationTendency,
-		r.FactorOfSafety, r.PressureToSlip, r.Rake}
+		r.FactorOfSafety, r.PressureToSlip, r.Rake, r.SlipTrend}
 	b = field(b, f, 0, p.Name)
 	for i, v := range nums {
 		b = sep(b, f, i+1)
@@ -95,9 +95,9 @@ func AppendRow(b []byte, f Format, p *site.Plane, r *planes.Result, extras []str
 			b = appendNumber(b, v)
 		}
 	}
-	b = sep(b, f, 14)
-	b = value(b, f, r.Sense.String(), r.Sense == planes.NoSlip)
 	b = sep(b, f, 15)
+	b = value(b, f, r.Sense.String(), r.Sense == planes.NoSlip)
+	b = sep(b, f, 16)
 	b = value(b, f, r.State.String(), false)
 	for i, e := range p.Extras {
 		if f == JSON {

@@ -38,13 +38,13 @@ func FuzzEscaping(f *testing.F) {
 func TestUndefinedValues(t *testing.T) {
 	p := site.Plane{Name: "P", Orientation: planes.MustNew(90, 0), Depth: 10}
 	nan := math.NaN()
-	r := planes.Result{SlipTendency: nan, NormalisedSlip: nan, DilationTendency: nan, FactorOfSafety: nan, Rake: nan, Normal: math.Copysign(0, -1), State: planes.Opening}
+	r := planes.Result{SlipTendency: nan, NormalisedSlip: nan, DilationTendency: nan, FactorOfSafety: nan, Rake: nan, SlipTrend: nan, Normal: math.Copysign(0, -1), State: planes.Opening}
 	row := string(AppendRow(nil, CSV, &p, &r, nil, true))
 	rec, err := csv.NewReader(strings.NewReader(row)).Read()
 	if err != nil || len(rec) != len(Columns) {
 		t.Fatalf("row %q: %v", row, err)
 	}
-	for _, i := range []int{8, 9, 10, 11, 13, 14} {
+	for _, i := range []int{8, 9, 10, 11, 13, 14, 15} {
 		if rec[i] != "" {
 			t.Errorf("column %s = %q, want empty", Columns[i], rec[i])
 		}
@@ -57,7 +57,7 @@ func TestUndefinedValues(t *testing.T) {
 	if err := json.Unmarshal([]byte(js), &v); err != nil {
 		t.Fatalf("JSON row %s: %v", js, err)
 	}
-	for _, i := range []int{8, 9, 10, 11, 13, 14} {
+	for _, i := range []int{8, 9, 10, 11, 13, 14, 15} {
 		if x, ok := v[0][Columns[i]]; !ok || x != nil {
 			t.Errorf("JSON %s = %v, want null", Columns[i], x)
 		}

@@ -49,6 +49,19 @@ func Rake(v float64) string {
 	return fmt.Sprintf("%.0f", r+0)
 }
 
+// Trend rounds an azimuth to a whole three-digit number of degrees in
+// [0, 360): 359.7 shows as 000; "—" when undefined.
+func Trend(v float64) string {
+	if math.IsNaN(v) {
+		return "—"
+	}
+	r := math.Round(v)
+	if r >= 360 {
+		r -= 360
+	}
+	return fmt.Sprintf("%03.0f", r+0)
+}
+
 // Plural is "1 one" or "n many".
 func Plural(n int, one, many string) string {
 	if n == 1 {

@@ -70,6 +70,9 @@ func Stability(p assess.Named) string {
 	case math.IsNaN(r.FactorOfSafety):
 		return fmt.Sprintf("%s, carrying no shear stress", where)
 	}
+	if r.OpensFirst {
+		return fmt.Sprintf("%s, factor of safety %.2f, which would open (its cohesion carrying the shear stress until then) after a %.2f MPa rise in pore pressure", where, r.FactorOfSafety, r.PressureToSlip)
+	}
 	return fmt.Sprintf("%s, factor of safety %.2f, which would slip after a %.2f MPa rise in pore pressure", where, r.FactorOfSafety, r.PressureToSlip)
 }
 
