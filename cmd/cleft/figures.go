@@ -132,7 +132,7 @@ func (a *screened) figures() []*namedFigure {
 		{file: "stereonet-slip",
 			title: fmt.Sprintf("Slip tendency of every plane, and of every orientation at %g m", z),
 			caption: fmt.Sprintf("Lower-hemisphere equal-area net of poles to planes. Each pole is coloured by the plane's own slip tendency Ts = τ/σn' at its own depth (the key's upper strip) and shaped by its state (circle stable, triangle critical, square with a cross opening); critical and opening poles are named, and every pole when there are at most %d. The background is Ts for every orientation at %g m with the site's water model and strength, in paler bands stepped at its contour lines (the key's lower strip); the dark red line (if any) is where the factor of safety is 1 and orientations past it would slip. The black hexagons with one, two and three bars are the principal stress axes σ1, σ2 and σ3; great circles are drawn for the critical and opening planes, dashed ones for the mean planes of the joint sets. %s",
-				plots.NameAll, 				z, traceNote(a.Assessment)),
+				plots.NameAll, z, traceNote(a.Assessment)),
 			fig: stereonet(a.Assessment, fo.with(plots.SlipTendency), 19, 13.5), w: cm(19, 0), h: cm(13.5, 0)},
 		{file: "stereonet-dilation",
 			title:   fmt.Sprintf("Dilation tendency of every plane, and of every orientation at %g m", z),
