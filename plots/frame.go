@@ -16,6 +16,7 @@ type frame struct {
 	key   *keyLayout
 	keyAt vg.Point // the key's top-left corner
 	below bool     // the key is under the main drawing
+	fits  bool     // the key fits beside or under a main area of some size
 }
 
 // scorer rates a main area for a figure in look l: larger is better.
@@ -24,7 +25,10 @@ type scorer func(l look, main vg.Rectangle) float64
 // layFrame lays out a figure on c: text sized from the canvas (lookFor),
 // shrunk step by step while the main drawing would get less than
 // 0.6 of what it would have without a key, or the title more than a third
-// of the height; at the smallest look it takes the best it can.
+// of the height. At the smallest look it takes the best it can; on a canvas
+// too small even for that (below the 8 × 8 cm the figures are made for) it
+// leaves out the key's notes, then the title lines after the first two,
+// then the key, rather than draw over the drawing.
 func layFrame(c draw.Canvas, title []string, key *keyBox, score scorer) frame {
 	w, h := c.Max.X-c.Min.X, c.Max.Y-c.Min.Y
 	l := lookFor(w, h)
@@ -35,10 +39,23 @@ func layFrame(c draw.Canvas, title []string, key *keyBox, score scorer) frame {
 		}
 		var more bool
 		if l, more = l.smaller(); !more {
-			f, _ = l.frameOn(c, title, key, score)
+			break
+		}
+	}
+	bare := *key
+	bare.notes = nil
+	short := title[:min(2, len(title))]
+	for _, try := range []struct {
+		title []string
+		key   *keyBox
+	}{{title, key}, {title, &bare}, {short, &bare}, {title[:min(1, len(title))], &keyBox{}}} {
+		f, _ := l.frameOn(c, try.title, try.key, score)
+		if f.fits {
 			return f
 		}
 	}
+	f, _ := l.frameOn(c, title[:min(1, len(title))], &keyBox{}, score)
+	return f
 }
 
 // frameOn lays out the figure in look l and reports whether the layout is
@@ -72,12 +89,12 @@ func (l look) frameOn(c draw.Canvas, title []string, key *keyBox, score scorer) 
 			continue
 		}
 		main := vg.Rectangle{Min: body.Min, Max: vg.Point{X: body.Max.X - kw - gap, Y: body.Max.Y}}
-		try(frame{l: l, inner: inner, title: tl, main: main, key: kl, keyAt: vg.Point{X: body.Max.X - kw, Y: body.Max.Y}})
+		try(frame{l: l, inner: inner, title: tl, main: main, key: kl, keyAt: vg.Point{X: body.Max.X - kw, Y: body.Max.Y}, fits: true})
 	}
 	// Key under the main drawing, across the width.
 	if kl := key.fit(l, bw); kl.h+gap < bh {
 		main := vg.Rectangle{Min: vg.Point{X: body.Min.X, Y: body.Min.Y + kl.h + gap}, Max: body.Max}
-		try(frame{l: l, inner: inner, title: tl, main: main, key: kl, keyAt: vg.Point{X: body.Min.X, Y: body.Min.Y + kl.h}, below: true})
+		try(frame{l: l, inner: inner, title: tl, main: main, key: kl, keyAt: vg.Point{X: body.Min.X, Y: body.Min.Y + kl.h}, below: true, fits: true})
 	}
 	if best.key == nil { // the key fits nowhere: give it the body's width
 		best.key = key.fit(l, bw)

@@ -87,7 +87,7 @@ func (k *keyBox) fit(l look, w vg.Length) *keyLayout {
 		kl.h += kl.notes.height() + gap
 	}
 	if len(k.rows) == 0 {
-		kl.h -= gap
+		kl.h = max(0, kl.h-gap)
 		return kl
 	}
 	// Rows flow into columns: as many as fit at their natural width, or

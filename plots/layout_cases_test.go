@@ -22,7 +22,7 @@ var (
 )
 
 // demoAssessment is the built-in demo site, assessed once.
-func demoAssessment(t *testing.T) *assess.Assessment {
+func demoAssessment(t testing.TB) *assess.Assessment {
 	t.Helper()
 	demoOnce.Do(func() {
 		var s *site.Site
@@ -39,7 +39,7 @@ func demoAssessment(t *testing.T) *assess.Assessment {
 // demoNet is a stereonet of the demo's first n planes (all when n < 0) at
 // the figure depth, as cleft plot builds it; trace says which planes get
 // great circles.
-func demoNet(t *testing.T, m Measure, p Projection, n int, trace func(planes.PlaneState) bool, w, h vg.Length) *Stereonet {
+func demoNet(t testing.TB, m Measure, p Projection, n int, trace func(planes.PlaneState) bool, w, h vg.Length) *Stereonet {
 	a := demoAssessment(t)
 	z := a.FigureDepth()
 	st := &Stereonet{Site: a.Site.Name, Model: a.Site.Summary(), Depth: z, State: a.Site.Model.At(z), Criterion: a.Site.Criterion, Measure: m, Proj: p}
@@ -61,7 +61,7 @@ func always(planes.PlaneState) bool     { return true }
 
 // demoMohrOf is the Mohr diagram of the demo's first n planes (all when
 // n < 0) at the figure depth, as cleft plot builds it.
-func demoMohrOf(t *testing.T, n int) *Mohr {
+func demoMohrOf(t testing.TB, n int) *Mohr {
 	a := demoAssessment(t)
 	z := a.FigureDepth()
 	s := a.Site

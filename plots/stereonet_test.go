@@ -105,13 +105,17 @@ func TestAxisSymbolsAreHexagons(t *testing.T) {
 	}
 }
 
-// BenchmarkDrawSVG times laying out and drawing the small test figures as
-// SVG at the default size (their fields computed beforehand).
+// BenchmarkDrawSVG times laying out and drawing figures as SVG at the
+// default size, their fields computed beforehand: the small test figures,
+// and the demo's stereonet (139 poles) and Mohr diagram.
 func BenchmarkDrawSVG(b *testing.B) {
 	for _, c := range []struct {
 		name string
 		fig  Figure
-	}{{"stereonet", demoStereonet()}, {"mohr", demoMohr()}, {"density", demoDensity()}} {
+	}{
+		{"stereonet", demoStereonet()}, {"mohr", demoMohr()}, {"density", demoDensity()},
+		{"stereonet-demo", demoNet(b, SlipTendency, EqualArea, -1, unstable, benchW, benchH)}, {"mohr-demo", demoMohrOf(b, -1)},
+	} {
 		b.Run(c.name, func(b *testing.B) {
 			for b.Loop() {
 				if err := Write(c.fig, benchW, benchH, "svg", io.Discard); err != nil {
