@@ -98,20 +98,17 @@ func NewDensityField(p Projection, poles []r3.Vec, weights []float64, n int) (*F
 	return f, k
 }
 
-// Draw draws the figure on c.
+// Draw draws the figure on c, laid out like the tendency stereonet: text
+// sized from the canvas, the key beside the net or under it, the set names
+// clear of the poles and of each other.
 func (d *DensityNet) Draw(c draw.Canvas) {
-	margin := vg.Points(12)
-	c = draw.Crop(c, margin, -margin, margin, -margin)
-	lines := append([]string{d.Site}, d.Lines...)
-	th := titleBlock(&c, lines) + vg.Points(6)
-	body := draw.Crop(c, 0, 0, 0, -th)
-	side := min(body.Max.X-body.Min.X-vg.Points(150), body.Max.Y-body.Min.Y)
-	label := vg.Points(14)
-	n := net{c: &c, cx: body.Min.X + side/2, cy: body.Max.Y - side/2, r: side/2 - label}
 	if d.Field == nil {
 		panic("plots: DensityNet.Field is nil: compute it with NewDensityField")
 	}
 	hi := math.Max(6, math.Ceil(d.Field.Max/2)*2)
+	f := layFrame(c, append([]string{d.Site}, d.Lines...), d.key(hi), netScore)
+	n := netIn(&c, f.square(), f.l)
+	g := glyphScale(n.r)
 	var ramp Ramp
 	drawRaster(n, d.Field, func(v float64) color.NRGBA { return pale(ramp.At(v / hi)) })
 	thin := draw.LineStyle{Color: color.NRGBA{R: 0x10, G: 0x10, B: 0x10, A: 0xa0}, Width: vg.Points(0.5)}
@@ -120,19 +117,18 @@ func (d *DensityNet) Draw(c draw.Canvas) {
 			n.c.StrokeLines(thin, n.path(line))
 		}
 	}
-	drawPrimitive(n)
+	drawPrimitiveLook(n, f.l)
+	lab := &labeller{bounds: f.inner, pad: f.l.pt(1)}
+	lab.blockText(f.titleRect())
+	lab.blockText(f.keyRect())
+	lab.blockText(n.northBox(f.l))
 	// Poles: small dots, open for unassigned readings.
 	for i, p := range d.Poles {
 		at := n.pt(d.Proj.ProjectVec(p))
-		if d.InSet == nil || d.InSet[i] {
-			c.DrawGlyph(draw.GlyphStyle{Color: poleInk, Radius: vg.Points(1.3), Shape: draw.CircleGlyph{}}, at)
-		} else {
-			c.DrawGlyph(draw.GlyphStyle{Color: poleInk, Radius: vg.Points(1.6), Shape: draw.RingGlyph{}}, at)
-		}
+		readingGlyph(&c, at, d.InSet == nil || d.InSet[i], g)
+		lab.block(square(at, vg.Points(1.6*g+0.5)))
 	}
 	// Set means with their α95 cones.
-	lab := textStyle(9, true, ink)
-	lab.XAlign, lab.YAlign = draw.XLeft, draw.YBottom
 	for _, s := range d.Sets {
 		pole := s.Mean.Pole()
 		if !math.IsNaN(s.Alpha95) {
@@ -142,10 +138,25 @@ func (d *DensityNet) Draw(c draw.Canvas) {
 			}
 		}
 		at := n.pt(d.Proj.Project(pole))
-		axisGlyph(n.c, 1, at)
-		haloText(n.c, lab, vg.Point{X: at.X + vg.Points(6), Y: at.Y + vg.Points(4)}, s.Name)
+		meanGlyph(n.c, at, g)
+		lab.block(square(at, meanRadius(g)))
 	}
-	d.drawKey(draw.Crop(body, side+vg.Points(16), 0, 0, 0), hi)
+	sty := f.l.text(9, 6.5, true, ink)
+	for _, s := range d.Sets {
+		lab.place(sty, s.Name, n.pt(d.Proj.Project(s.Mean.Pole())), meanRadius(g), math.Pi/4, 10)
+	}
+	lab.draw(&c)
+	f.drawText(&c)
+}
+
+// readingGlyph draws the pole of a reading: a dot when it is in a set, a
+// ring when it is not.
+func readingGlyph(c *draw.Canvas, at vg.Point, inSet bool, g float64) {
+	if inSet {
+		c.DrawGlyph(draw.GlyphStyle{Color: poleInk, Radius: vg.Points(1.3 * g), Shape: draw.CircleGlyph{}}, at)
+		return
+	}
+	c.DrawGlyph(draw.GlyphStyle{Color: poleInk, Radius: vg.Points(1.6 * g), Shape: draw.RingGlyph{}}, at)
 }
 
 func (d *DensityNet) levels(hi float64) []float64 {
@@ -159,45 +170,17 @@ func (d *DensityNet) levels(hi float64) []float64 {
 	return lv
 }
 
-func (d *DensityNet) drawKey(c draw.Canvas, hi float64) {
-	x, y := c.Min.X, c.Max.Y
-	head := textStyle(8, true, ink)
-	c.FillText(head, vg.Point{X: x, Y: y}, "pole density (Kamb 1959)")
-	y -= head.Height("X") + vg.Points(8)
-	barW, barH := vg.Points(12), (c.Max.Y-c.Min.Y)*0.36
-	top, bottom := y, y-barH
-	var ramp Ramp
-	const steps = 100
-	for k := range steps {
-		y0 := bottom + barH*vg.Length(k)/steps
-		y1 := bottom + barH*vg.Length(k+1)/steps
-		c.FillPolygon(ramp.At((float64(k)+0.5)/steps), []vg.Point{{X: x, Y: y0}, {X: x + barW, Y: y0}, {X: x + barW, Y: y1 + 0.3}, {X: x, Y: y1 + 0.3}})
-	}
-	frame := draw.LineStyle{Color: ink, Width: vg.Points(0.6)}
-	c.StrokeLines(frame, []vg.Point{{X: x, Y: bottom}, {X: x + barW, Y: bottom}, {X: x + barW, Y: top}, {X: x, Y: top}, {X: x, Y: bottom}})
-	tick := textStyle(7, false, ink)
-	tick.YAlign = draw.YCenter
-	for _, l := range append([]float64{0}, append(d.levels(hi), hi)...) {
-		yy := bottom + barH*vg.Length(l/hi)
-		c.StrokeLine2(frame, x, yy, x+barW+vg.Points(3), yy)
-		c.FillText(tick, vg.Point{X: x + barW + vg.Points(5), Y: yy}, fmt.Sprintf("%gσ", l))
-	}
-	note := textStyle(7, false, grey)
+// key returns the density net's key.
+func (d *DensityNet) key(hi float64) *keyBox {
 	k := d.Kamb
-	for i, t := range []string{
-		fmt.Sprintf("counting cone %.1f° (%.1f%% of the net)", k.Theta, 100*k.Area),
-		fmt.Sprintf("uniform scatter: %.1f poles = 3σ, σ = %.2f", k.Expected, k.Sigma),
-		"contours every 2σ",
-	} {
-		c.FillText(note, vg.Point{X: x, Y: bottom - vg.Points(5+9*float64(i))}, t)
-	}
-	y = bottom - vg.Points(42)
-	row := func(glyph func(vg.Point), txt string) {
-		glyph(vg.Point{X: x + vg.Points(6), Y: y})
-		t := textStyle(7.5, false, ink)
-		t.YAlign = draw.YCenter
-		c.FillText(t, vg.Point{X: x + vg.Points(18), Y: y}, txt)
-		y -= vg.Points(14)
+	kb := &keyBox{
+		head: "pole density (Kamb 1959)",
+		bar:  &densityBar{hi: hi, marks: append([]float64{0}, append(d.levels(hi), hi)...)},
+		notes: []string{
+			fmt.Sprintf("counting cone %.1f° (%.1f%% of the net)", k.Theta, 100*k.Area),
+			fmt.Sprintf("uniform scatter: %.1f poles = 3σ, σ = %.2f", k.Expected, k.Sigma),
+			"contours every 2σ",
+		},
 	}
 	in, out := 0, 0
 	for i := range d.Poles {
@@ -207,15 +190,42 @@ func (d *DensityNet) drawKey(c draw.Canvas, hi float64) {
 			out++
 		}
 	}
-	row(func(a vg.Point) {
-		c.DrawGlyph(draw.GlyphStyle{Color: poleInk, Radius: vg.Points(1.3), Shape: draw.CircleGlyph{}}, a)
-	}, fmt.Sprintf("pole of a reading in a set (%d)", in))
-	row(func(a vg.Point) {
-		c.DrawGlyph(draw.GlyphStyle{Color: poleInk, Radius: vg.Points(1.6), Shape: draw.RingGlyph{}}, a)
-	}, fmt.Sprintf("unassigned reading (%d)", out))
-	row(func(a vg.Point) { axisGlyph(&c, 1, a) }, "set mean pole, with its α95 cone")
+	kb.rows = append(kb.rows,
+		keyRow{glyph: func(c *draw.Canvas, at vg.Point, l look) { readingGlyph(c, at, true, keyGlyph(l)) }, text: fmt.Sprintf("pole of a reading in a set (%d)", in)},
+		keyRow{glyph: func(c *draw.Canvas, at vg.Point, l look) { readingGlyph(c, at, false, keyGlyph(l)) }, text: fmt.Sprintf("unassigned reading (%d)", out)},
+		keyRow{glyph: func(c *draw.Canvas, at vg.Point, l look) { meanGlyph(c, at, keyGlyph(l)) }, text: "set mean pole, with its α95 cone"},
+	)
 	for _, s := range d.Sets {
 		l := s.Mean.Pole()
-		row(func(vg.Point) {}, fmt.Sprintf("%s: %s, pole %s, α95 %.1f°, n = %d", s.Name, s.Mean, fmtLine(l.Trend, l.Plunge), s.Alpha95, s.Count))
+		kb.rows = append(kb.rows, keyRow{text: fmt.Sprintf("%s: %s, pole %s, α95 %.1f°, n = %d", s.Name, s.Mean, fmtLine(l.Trend, l.Plunge), s.Alpha95, s.Count)})
 	}
+	return kb
+}
+
+// densityBar is the density net's colour bar, 0 to hi in multiples of σ,
+// rising to the right, labelled where the labels clear each other.
+type densityBar struct {
+	hi    float64
+	marks []float64
+}
+
+func (b *densityBar) height(l look, _ vg.Length) vg.Length {
+	_, th := textBox(l.tickText(), "0σ")
+	return l.pt(10) + l.pt(3) + th
+}
+
+func (b *densityBar) draw(c *draw.Canvas, l look, r vg.Rectangle) {
+	w := min(r.Max.X-r.Min.X, l.pt(200))
+	x0, top := r.Min.X, r.Max.Y
+	bottom := top - l.pt(10)
+	var ramp Ramp
+	const steps = 100
+	for k := range steps {
+		x1 := x0 + w*vg.Length(k)/steps
+		x2 := x0 + w*vg.Length(k+1)/steps
+		c.FillPolygon(ramp.At((float64(k)+0.5)/steps), []vg.Point{{X: x1, Y: bottom}, {X: x2 + 0.3, Y: bottom}, {X: x2 + 0.3, Y: top}, {X: x1, Y: top}})
+	}
+	frame := draw.LineStyle{Color: ink, Width: vg.Points(0.6)}
+	c.StrokeLines(frame, []vg.Point{{X: x0, Y: bottom}, {X: x0 + w, Y: bottom}, {X: x0 + w, Y: top}, {X: x0, Y: top}, {X: x0, Y: bottom}})
+	barTicks(c, l, r, bottom, b.marks, func(v float64) vg.Length { return x0 + w*vg.Length(v/b.hi) }, func(v float64) string { return fmt.Sprintf("%gσ", v) })
 }

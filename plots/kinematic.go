@@ -181,7 +181,7 @@ func kinGlyph(c *draw.Canvas, it KinItem, at vg.Point) {
 	heavy := draw.LineStyle{Color: poleInk, Width: vg.Points(1.5)}
 	poly := func(fill color.Color, edge draw.LineStyle, pts []vg.Point) {
 		pts = append(pts, pts[0])
-		c.FillPolygon(white, grow(pts, at, 1.3))
+		c.FillPolygon(white, growPolygon(pts, at, 1.3))
 		c.FillPolygon(fill, pts)
 		c.StrokeLines(edge, pts)
 	}
@@ -222,8 +222,8 @@ func kinGlyph(c *draw.Canvas, it KinItem, at vg.Point) {
 	c.DrawGlyph(draw.GlyphStyle{Color: grey, Radius: r, Shape: draw.RingGlyph{}}, at)
 }
 
-// grow scales a closed polygon about o so that its halo is d points wider.
-func grow(pts []vg.Point, o vg.Point, d float64) []vg.Point {
+// growPolygon scales a closed polygon about o so that its halo is d points wider.
+func growPolygon(pts []vg.Point, o vg.Point, d float64) []vg.Point {
 	out := make([]vg.Point, len(pts))
 	for i, p := range pts {
 		dx, dy := float64(p.X-o.X), float64(p.Y-o.Y)

@@ -71,15 +71,15 @@ func (m Measure) Label() string {
 // of the colour ramp either way.
 func (m Measure) HighIsUnstable() bool { return m <= DilationTendency }
 
-// Direction says which way the colour bar reads, for its note.
+// Direction says which end of the colour bar is which, for its note.
 func (m Measure) Direction() string {
 	switch m {
 	case DilationTendency:
-		return "↑ more prone to open (lighter)"
+		return "lighter, to the right: more prone to open"
 	case FactorOfSafety, PressureToSlip:
-		return "↓ nearer to slip (lighter)"
+		return "lighter, to the left: nearer to slip"
 	}
-	return "↑ nearer to slip (lighter)"
+	return "lighter, to the right: nearer to slip"
 }
 
 // DefaultContours are the contour levels drawn when none are asked for.

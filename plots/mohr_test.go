@@ -2,6 +2,7 @@ package plots
 
 import (
 	"math"
+	"strings"
 	"testing"
 
 	"cleft/planes"
@@ -46,5 +47,48 @@ func TestMohrCriticalPlane(t *testing.T) {
 	end := r.EffectiveNormal - m.State.Biot*r.PressureToSlip
 	if got := m.Envelopes[0].Criterion.Strength(end); math.Abs(got-r.Shear) > 1e-12 {
 		t.Errorf("arrow ends at strength %v, want τ = %v", got, r.Shear)
+	}
+}
+
+func TestMohrArrowClearOfMarker(t *testing.T) {
+	// The arrow never lies over its plane's marker, and its head ends on
+	// the envelope's abscissa, for spans shorter and longer than the head,
+	// both ways.
+	const tol = 1e-9 // pt
+	c := draw.New(vgimg.New(200, 200))
+	from := vg.Point{X: 100, Y: 100}
+	for _, l := range []look{{k: lookMin}, {k: 1}, {k: lookMax}} {
+		rm := stateRadius(planes.Critical, 1)
+		for _, dx := range []vg.Length{-80, -12, -3, -0.5, 0.5, 3, 12, 80} {
+			to := vg.Point{X: from.X + dx, Y: from.Y}
+			r := shiftArrow(&c, from, to, rm, l)
+			if overlaps(r, square(from, rm)) {
+				t.Errorf("k %v, span %v pt: arrow %v over the marker", l.k, dx, r)
+			}
+			if math.Abs(float64(r.Min.X-to.X)) > tol && math.Abs(float64(r.Max.X-to.X)) > tol {
+				t.Errorf("k %v, span %v pt: arrow %v does not reach %v", l.k, dx, r, to.X)
+			}
+		}
+	}
+}
+
+func TestMohrArrowDepth(t *testing.T) {
+	// The arrow's key line states the diagram's depth and, for a plane at
+	// another depth of its own, the tables' value there.
+	m := demoMohr()
+	i := m.critical()
+	q := &m.Points[i]
+	if s := m.arrowText(q); !strings.Contains(s, "at 200 m") || strings.Contains(s, "own depth") {
+		t.Errorf("no own result: %q", s)
+	}
+	own := planes.Resolve(m.State, planes.MustNew(80, 10), &planes.Coulomb{Mu: 0.6})
+	own.PressureToSlip = 0.42
+	q.Own, q.Depth = &own, 350
+	if s := m.arrowText(q); !strings.Contains(s, "at 200 m") || !strings.Contains(s, "own depth, 350 m") || !strings.Contains(s, "+0.42 MPa") {
+		t.Errorf("own result at 350 m: %q", s)
+	}
+	q.Depth = 200
+	if s := m.arrowText(q); strings.Contains(s, "own depth") {
+		t.Errorf("own depth equal to the diagram's: %q", s)
 	}
 }

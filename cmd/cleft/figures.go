@@ -113,7 +113,7 @@ func mohr(a *assess.Assessment, o figureOptions) *plots.Mohr {
 		p := &a.Planes[i]
 		var r planes.Result
 		c := rv.ResolveAt(p, z, &r)
-		m.Points = append(m.Points, plots.MohrPoint{Name: p.Name, Result: r})
+		m.Points = append(m.Points, plots.MohrPoint{Name: p.Name, Result: r, Depth: p.Depth, Own: &a.Results[i]})
 		if k := c.String(); !seen[k] {
 			seen[k] = true
 			m.Envelopes = append(m.Envelopes, plots.Envelope{Label: fmt.Sprintf("%s: %s", p.Name, k), Criterion: c})
@@ -131,16 +131,16 @@ func (a *screened) figures() []*namedFigure {
 	figs := []*namedFigure{
 		{file: "stereonet-slip",
 			title: fmt.Sprintf("Slip tendency of every plane, and of every orientation at %g m", z),
-			caption: fmt.Sprintf("Lower-hemisphere equal-area net of poles to planes. Each pole is coloured by the plane's own slip tendency Ts = τ/σn' at its own depth and shaped by its state (circle stable, triangle critical, square with a cross opening). The paler background is Ts for every orientation at %g m with the site's water model and strength; thin lines are its contours, the dark red line (if any) is where the factor of safety is 1 and orientations past it would slip. Black symbols are the principal stress axes; great circles are drawn for the critical and opening planes, dashed ones for the mean planes of the joint sets. %s",
-				z, traceNote(a.Assessment)),
+			caption: fmt.Sprintf("Lower-hemisphere equal-area net of poles to planes. Each pole is coloured by the plane's own slip tendency Ts = τ/σn' at its own depth (the key's upper strip) and shaped by its state (circle stable, triangle critical, square with a cross opening); critical and opening poles are named, and every pole when there are at most %d. The background is Ts for every orientation at %g m with the site's water model and strength, in paler bands stepped at its contour lines (the key's lower strip); the dark red line (if any) is where the factor of safety is 1 and orientations past it would slip. The black hexagons with one, two and three bars are the principal stress axes σ1, σ2 and σ3; great circles are drawn for the critical and opening planes, dashed ones for the mean planes of the joint sets. %s",
+				plots.NameAll, z, traceNote(a.Assessment)),
 			fig: stereonet(a.Assessment, fo.with(plots.SlipTendency), 19, 13.5), w: cm(19, 0), h: cm(13.5, 0)},
 		{file: "stereonet-dilation",
 			title:   fmt.Sprintf("Dilation tendency of every plane, and of every orientation at %g m", z),
-			caption: "As Figure 1 for the dilation tendency Td = (σ1 − σn)/(σ1 − σ3): the light end marks the planes nearest to opening, the likely water paths.",
+			caption: "As Figure 1 for the dilation tendency Td = (σ1 − σn)/(σ1 − σ3): the light end (right on the key) marks the planes nearest to opening, the likely water paths.",
 			fig:     stereonet(a.Assessment, fo.with(plots.DilationTendency), 19, 13.5), w: cm(19, 0), h: cm(13.5, 0)},
 		{file: "mohr",
 			title:   fmt.Sprintf("Mohr diagram of effective stress at %g m", z),
-			caption: fmt.Sprintf("The three effective Mohr circles at %g m and every plane at that depth by its orientation (planes with their own pore pressure keep its excess over the water model). Red lines are the strength envelopes in use. The arrow shows the change in pore pressure that brings the most critical plane (opening planes aside) to its envelope. Both axes have the same scale.", z),
+			caption: fmt.Sprintf("The three effective Mohr circles at %g m and every plane at that depth by its orientation (planes with their own pore pressure keep its excess over the water model). Red lines are the strength envelopes in use. The arrow shows the change in pore pressure that brings the most critical plane (opening planes aside) to its envelope at this depth; the key gives its value and, for a plane at another depth of its own, the value of the tables there. Critical and opening planes are named. Both axes have the same scale.", z),
 			fig:     mohr(a.Assessment, fo), w: cm(17, 0), h: cm(12, 0)},
 	}
 	if a.Grouping != nil {
