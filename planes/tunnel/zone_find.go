@@ -98,9 +98,15 @@ func find(st *Section, o *planes.Orientation, c planes.Criterion, g Grid, outlin
 			_, bestOpen = p.refine(float64(openK)*dth, dth, bestOpen, isOpen)
 		}
 		z.OpeningDepth = bestOpen - p.a
+		if z.OpeningDepth < 2*rootTol*p.a {
+			z.OpeningDepth = 0 // the wall alone, within the bisection's resolution
+		}
 	}
 	return z
 }
+
+// rootTol is the resolution of the bisections, relative to the radius.
+const rootTol = 1e-9
 
 // Which part of the zone a search follows.
 const (
@@ -143,7 +149,6 @@ func (p *probe) init(st *Section, o *planes.Orientation, c planes.Criterion, g G
 	p.rOut = g.Outer * p.a
 	p.m = int(math.Ceil((g.Outer - 1) / g.Step * (1 - 1e-12)))
 	p.h = (p.rOut - p.a) / float64(p.m)
-	const rootTol = 1e-9 // of the radius
 	p.nb = int(math.Ceil(math.Log2(p.h / (rootTol * p.a))))
 	// The far field in NED: the rows of the tunnel frame turned back.
 	u, r, l := st.Up, st.Right, st.Along

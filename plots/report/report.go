@@ -27,6 +27,7 @@ type Report struct {
 	Sets      *Table  // joint sets of the field readings, or nil
 	Slope     *Table  // the rock-slope screening, or nil
 	Tunnel    *Table  // the tunnel screening, or nil
+	Zones     *Table  // the tunnel's slip zones, shown before Tunnel, or nil
 	Figures   []Figure
 	Criterion string // the site criterion in words
 	Caution   string
