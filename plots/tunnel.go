@@ -17,20 +17,26 @@ type TunnelSeries struct {
 	FS       []float64 // far-field factor of safety at each station, with the plane's own strength (NaN: undefined)
 	FarBad   []bool    // critical or opening in the far field
 	WallSlip []bool    // critical or opening somewhere on the wall
+	// ZoneDepth is the greatest depth of the slip zone beyond the wall at
+	// each station, m (NaN: no zone; a lower bound where the zone reaches
+	// the edge of the search). Nil draws no zone panel.
+	ZoneDepth []float64
 }
 
 // TunnelProfile is the along-alignment chart: cover, σmax/UCS with the
-// spalling band, and the far-field factor of safety of each plane or set
-// (with its own strength, so one FS = 1 line serves every plane), with
-// the stretches shaded where a plane is critical in the far field (darker)
-// or slips at the wall (lighter).
+// spalling band, the far-field factor of safety of each plane or set (with
+// its own strength, so one FS = 1 line serves every plane), and the depth
+// of each one's slip zone beyond the wall against ZoneLimit, with the
+// stretches shaded where a plane is critical in the far field (darker) or
+// slips at the wall (lighter).
 type TunnelProfile struct {
-	Site     string
-	Lines    []string
-	Chainage []float64
-	Cover    []float64
-	Ratio    []float64
-	Series   []TunnelSeries
+	Site      string
+	Lines     []string
+	Chainage  []float64
+	Cover     []float64
+	Ratio     []float64
+	Series    []TunnelSeries
+	ZoneLimit float64 // m beyond the wall
 }
 
 var dashSet = [][]vg.Length{nil, {vg.Points(5), vg.Points(2)}, {vg.Points(1.5), vg.Points(1.5)}, {vg.Points(6), vg.Points(2), vg.Points(1.5), vg.Points(2)}, {vg.Points(9), vg.Points(3)}}
@@ -170,7 +176,11 @@ func (t *TunnelProfile) Draw(c draw.Canvas) {
 	slip.Legend.Left = true
 
 	rows := [][]*plot.Plot{{cover}, {ratio}, {slip}}
-	tiles := draw.Tiles{Rows: 3, Cols: 1, PadY: vg.Points(6)}
+	if len(t.Series) > 0 && t.Series[0].ZoneDepth != nil {
+		slip.X.Label.Text = ""
+		rows = append(rows, []*plot.Plot{t.zonePanel(lo, hi, farShade)})
+	}
+	tiles := draw.Tiles{Rows: len(rows), Cols: 1, PadY: vg.Points(6)}
 	cs := plot.Align(rows, tiles, body)
 	for i, r := range rows {
 		r[0].Draw(cs[i][0])

@@ -37,7 +37,7 @@ func newAssessCmd() *cobra.Command {
   with readings_file:       sets.csv, sets-density.svg/.png (see cleft sets)
   with slope:               slope.csv, slope-kinematic.svg/.png (see cleft slope);
                             with readings also slope-readings.csv
-  with tunnel:              stations.csv, wall.csv, profile.csv, tunnel-*.svg/.png
+  with tunnel:              stations.csv, wall.csv, profile.csv, zones.csv, tunnel-*.svg/.png
 
 and prints a short summary: how many planes are critical or opening, the
 least stable three, and the frictional-limit check of the stress model.

@@ -147,7 +147,7 @@ func (a *screened) figures() []*namedFigure {
 		figs = append(figs, densityFigure(a.Grouping, a.Site.Name, plots.EqualArea))
 	}
 	if a.tunnel != nil {
-		figs = append(figs, tunnelFigures(a.Site, a.tunnel, a.tunnel.Worst())...)
+		figs = append(figs, tunnelFigures(a.Site, a.tunnel, sectionStation(a.tunnel), a.tunnel.Worst())...)
 	}
 	if a.slope != nil {
 		figs = append(figs, slopeFigure(a.Site.Name, a.slope))

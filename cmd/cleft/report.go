@@ -54,7 +54,7 @@ func (a *screened) report(example bool, facts assess.Facts, figs []*namedFigure)
 		}
 	}
 	if a.tunnel != nil {
-		r.Tunnel = tunnelReport(a.tunnel, s.TunnelDefaults)
+		r.Zones, r.Tunnel = zonesReport(a.tunnel), tunnelReport(a.tunnel, s.TunnelDefaults)
 	}
 	if a.Grouping != nil {
 		r.Sets = a.setsTable()
@@ -234,11 +234,11 @@ func slopeReadingsReport(counts []slope.Count) *report.Table {
 	return t
 }
 
-// tunnelReport is the tunnel screening as the report shows it: the notes of
-// the summary, and a table of each plane or set at the station of the
-// largest boundary stress σmax (the station of the largest σmax/UCS).
+// tunnelReport is the rest of the tunnel screening as the report shows it,
+// after zonesReport: the defaults, and a table of each plane or set at the
+// station of the largest boundary stress σmax (the largest σmax/UCS).
 func tunnelReport(sc *tunnel.Screening, defaults []string) *report.Table {
-	notes := words.TunnelLines(sc)
+	var notes []string
 	if len(defaults) > 0 {
 		notes = append(notes, "Defaults applied: "+strings.Join(defaults, "; ")+".")
 	}

@@ -120,8 +120,22 @@ func TestReportStructure(t *testing.T) {
 			}
 		}
 	})
-	if figs != 7 || svgs != 7 {
-		t.Errorf("%d figures, %d inline SVGs; want 7 and 7", figs, svgs)
+	if figs != 8 || svgs != 8 {
+		t.Errorf("%d figures, %d inline SVGs; want 8 and 8", figs, svgs)
+	}
+	// The tunnel section leads with the slip zones: one row per screened
+	// set, and the zone caution.
+	zrows := 0
+	walk(byID(doc, "zones"), func(n *html.Node) {
+		if n.Type == html.ElementNode && n.Data == "tr" {
+			zrows++
+		}
+	})
+	if zrows != 1+4 {
+		t.Errorf("zone table has %d rows, want a header and the 4 sets", zrows-1)
+	}
+	if tn := text(byID(doc, "tunnel")); !strings.Contains(tn, "slip zone up to") || !strings.Contains(tn, "not a support design") || !strings.Contains(tn, "Thiem") {
+		t.Error("the tunnel section lacks the zone headline, caution or pore-pressure rule")
 	}
 	data, _ := os.ReadFile(filepath.Join(dir, "report.html"))
 	for _, bad := range []string{"http://", "https://", "@import", "url("} {

@@ -12,7 +12,8 @@ import (
 )
 
 func (s *Site) readTunnel(v node) error {
-	m, err := v.mapping("alignment", "cover", "cover_file", "spacing", "radius", "rock", "sets", "wall_pore_pressure", "source")
+	m, err := v.mapping("alignment", "cover", "cover_file", "spacing", "radius", "rock", "sets", "wall_pore_pressure",
+		"support_pressure", "zone_depth_limit", "radius_of_influence", "source")
 	if err != nil {
 		return err
 	}
@@ -170,11 +171,45 @@ func (s *Site) readTunnel(v node) error {
 	} else {
 		defaults = append(defaults, "wall_pore_pressure = drained (Pp = 0 at the wall)")
 	}
+	if err := readZoneKeys(m, t, &defaults); err != nil {
+		return err
+	}
 	if _, err := t.Stations(); err != nil {
 		return &Error{File: s.File, Key: "tunnel.cover", Err: ErrRange, Msg: err.Error()}
 	}
 	s.Tunnel = t
 	s.TunnelDefaults = defaults
+	return nil
+}
+
+// readZoneKeys reads the keys of the support and the slip zones:
+// support_pressure (MPa, default 0), zone_depth_limit (m, default half the
+// radius) and radius_of_influence (m, beyond the radius; a drained wall
+// only, default twice the head over the axis at each station).
+func readZoneKeys(m *fields, t *tunnel.Tunnel, defaults *[]string) error {
+	var given bool
+	var err error
+	if t.Support, given, err = m.optNumber("support_pressure", unit(nonNegative, "MPa"), 0); err != nil {
+		return err
+	} else if !given {
+		*defaults = append(*defaults, "support_pressure = 0 MPa (unsupported wall)")
+	}
+	if t.ZoneLimit, given, err = m.optNumber("zone_depth_limit", unit(positive, "m"), t.Radius/2); err != nil {
+		return err
+	} else if !given {
+		*defaults = append(*defaults, fmt.Sprintf("zone_depth_limit = %g m (half the radius)", t.ZoneLimit))
+	}
+	iv, ok := m.get("radius_of_influence")
+	switch {
+	case ok && !t.Drained:
+		return iv.errf("applies to a drained wall only (with wall_pore_pressure: far-field the pore pressure is the far field's everywhere)").is(ErrConflict)
+	case ok:
+		if t.Influence, err = iv.numberIn(unit(interval{lo: t.Radius, hi: math.Inf(1), openLo: true, openHi: true}, "m")); err != nil {
+			return err
+		}
+	case t.Drained:
+		*defaults = append(*defaults, "radius_of_influence = twice the head of water over the axis, at least twice the radius")
+	}
 	return nil
 }
 

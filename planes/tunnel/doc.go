@@ -5,8 +5,10 @@
 // orientation class against the drive (Bieniawski 1989), the boundary
 // stresses of a circular opening round the perimeter (insitu/opening), their
 // largest value against the UCS (spalling, Martin, Kaiser & McCreath 1999),
-// and the arcs of the wall where the wall stress resolved on each plane is
-// critical or opening.
+// the arcs of the wall where the wall stress resolved on each plane is
+// critical or opening, and each plane's slip zone in the rock round the
+// opening (Find): how deep beyond the wall, where and over what area the
+// full elastic stress resolved on it is critical or opening.
 //
 // Screen is the entry point. Chainages and lengths are m, stresses MPa
 // (compression positive), angles degrees; perimeter angles run from the

@@ -1,6 +1,7 @@
 package tunnel
 
 import (
+	"fmt"
 	"math"
 
 	"cleft/insitu"
@@ -31,6 +32,10 @@ type Row struct {
 	Drive             DriveClass          // against the drive of the station's leg
 	Wall              []planes.PlaneState // at each wall point, every PerimeterStep from the crown
 	Critical, Opening []Arc               // runs of wall points in those states
+	// Zone is the region round the opening where the target is critical or
+	// opening under the stress in the rock (Find on Tunnel.ZoneGrid, with
+	// the pore-pressure rule of Screening.Section); empty with NoZones.
+	Zone Zone
 }
 
 // Result is the screening at one station.
@@ -49,7 +54,15 @@ type Result struct {
 	// stress; in their plane cases it is σθ,max, as τθz = 0).
 	Ratio  float64
 	WallPp float64 // pore pressure at the wall, MPa
-	Rows   []Row   // one per target
+	// Opening is the opening in its far field (tunnel frame) with the
+	// support pressure; Up, Right and Along are the tunnel frame's axes in
+	// the NED frame (opening.TunnelFrame).
+	Opening          opening.Circle
+	Up, Right, Along r3.Vec
+	// Influence is the radius of influence of the drained rule at this
+	// station, m from the axis (NaN for a wall at the far-field pressure).
+	Influence float64
+	Rows      []Row // one per target
 }
 
 // Screening is the tunnel screened station by station.
@@ -60,7 +73,12 @@ type Screening struct {
 }
 
 // Screen screens every station of t (t.Stations) in the far field of m
-// against every target.
+// against every target: the far field at the axis depth, the wall stresses
+// (with the support pressure t.Support) resolved on each target at the wall
+// points, and, unless t.NoZones, each target's slip zone in the rock, found
+// for all stations and targets in parallel (one worker per CPU). It is an
+// error for the opening to be invalid (opening.NewCircle) or the drained
+// rule's radius of influence not to lie beyond the radius.
 func Screen(t Tunnel, m insitu.Model, targets []Target) (*Screening, error) {
 	sts, err := t.Stations()
 	if err != nil {
@@ -70,31 +88,46 @@ func Screen(t Tunnel, m insitu.Model, targets []Target) (*Screening, error) {
 	n := 360 / PerimeterStep
 	walls := make([]insitu.State, n)
 	for _, st := range sts {
-		res := Result{Station: st, State: m.At(st.Depth)}
-		up, right, along := opening.TunnelFrame(geom.Line{Trend: st.Trend, Plunge: st.Plunge})
-		far := res.State.Total.Rotate([3]r3.Vec{up, right, along})
-		if !t.Drained {
+		res := Result{Station: st, State: m.At(st.Depth), Influence: math.NaN()}
+		res.Up, res.Right, res.Along = opening.TunnelFrame(geom.Line{Trend: st.Trend, Plunge: st.Plunge})
+		far := res.State.Total.Rotate([3]r3.Vec{res.Up, res.Right, res.Along})
+		if res.Opening, err = opening.NewCircle(far, t.Radius, t.Poisson, t.Support); err != nil {
+			return nil, fmt.Errorf("station at chainage %g m: %w", st.Chainage, err)
+		}
+		if t.Drained {
+			res.Influence = t.Influence
+			if res.Influence == 0 {
+				res.Influence = DefaultInfluence(res.State.PorePressure, t.Radius)
+			}
+			if !(res.Influence > t.Radius) {
+				return nil, fmt.Errorf("radius of influence %v m: want more than the radius %v m", res.Influence, t.Radius)
+			}
+		} else {
 			res.WallPp = res.State.PorePressure
 		}
 		for k := range n {
 			th := float64(k * PerimeterStep)
-			w := opening.Wall(far, th, t.Poisson)
-			res.Wall = append(res.Wall, w)
-			walls[k] = insitu.NewState(w.WallTensor(up, right, along, th), st.Depth, res.WallPp, res.State.Biot)
+			res.Wall = append(res.Wall, res.Opening.Wall(th))
+			// At the wall σrr is the support pressure: the field at r = a.
+			wt := res.Opening.At(t.Radius, th).Tensor(res.Up, res.Right, res.Along, th)
+			walls[k] = insitu.NewState(wt, st.Depth, 0, res.State.Biot)
 		}
-		res.ThetaMax = opening.MaxTangential(far, 0)
-		res.ThetaMin = opening.Peak{Stress: 2*(far.NN+far.EE) - res.ThetaMax.Stress, Theta: math.Mod(res.ThetaMax.Theta+90, 180)}
-		res.WallMax = opening.MaxWallPrincipal(far, t.Poisson, 0)
+		res.ThetaMax = opening.MaxTangential(far, t.Support)
+		res.ThetaMin = opening.Peak{Stress: 2*(far.NN+far.EE-t.Support) - res.ThetaMax.Stress, Theta: math.Mod(res.ThetaMax.Theta+90, 180)}
+		res.WallMax = opening.MaxWallPrincipal(far, t.Poisson, t.Support)
 		res.Ratio = res.WallMax.Stress / t.UCS
 		for _, tg := range targets {
 			row := Row{Drive: ClassifyDrive(tg.Orientation, st.Trend)}
 			s := res.State
-			if !math.IsNaN(tg.PoreExcess) {
-				s.PorePressure = math.Max(0, s.PorePressure+tg.PoreExcess)
-			}
+			s.PorePressure = tg.porePressure(s.PorePressure)
 			planes.ResolveTo(&row.Far, &s, &tg.Orientation, tg.Criterion)
 			var r planes.Result
+			wallPp := 0.0
+			if !t.Drained {
+				wallPp = s.PorePressure // the target's own, as in the zone
+			}
 			for k := range n {
+				walls[k].PorePressure = wallPp
 				planes.ResolveTo(&r, &walls[k], &tg.Orientation, tg.Criterion)
 				row.Wall = append(row.Wall, r.State)
 			}
@@ -104,7 +137,19 @@ func Screen(t Tunnel, m insitu.Model, targets []Target) (*Screening, error) {
 		}
 		sc.Stations = append(sc.Stations, res)
 	}
+	if !t.NoZones {
+		sc.findZones()
+	}
 	return sc, nil
+}
+
+// porePressure is the target's pore pressure where the water model gives
+// pp: pp, or max(0, pp + PoreExcess) when the target has its own.
+func (tg *Target) porePressure(pp float64) float64 {
+	if math.IsNaN(tg.PoreExcess) {
+		return pp
+	}
+	return math.Max(0, pp+tg.PoreExcess)
 }
 
 // Worst returns the index of the station with the largest Ratio.

@@ -21,6 +21,35 @@ type Tunnel struct {
 	Poisson float64      // ν of the rock
 	Sets    []string     // planes and sets to screen, by name; nil for all
 	Drained bool         // wall pore pressure 0 (else the far field's)
+
+	// Support is the internal support pressure on the wall, MPa ≥ 0 (the
+	// Lamé term of opening.Circle): σr = Support at the wall, σθ lowered by
+	// it. A watertight lining (Drained false) should carry at least the
+	// water pressure.
+	Support float64
+	// ZoneLimit is the depth of a slip zone beyond the wall (m) past which a
+	// stretch is reported (Screening.Deeper); 0 for Radius/2.
+	ZoneLimit float64
+	// Influence is the radius of influence of a drained wall's inflow, m from
+	// the axis, > Radius (see Drained); 0 for the default at each station,
+	// twice the head of water over the axis and at least 2·Radius
+	// (DefaultInfluence).
+	Influence float64
+	// ZoneGrid is the grid of the slip-zone search; zero fields take the
+	// defaults of Grid.
+	ZoneGrid Grid
+	// NoZones skips the slip-zone search (Row.Zone left empty), for callers
+	// that need only the far-field and wall screening, such as many
+	// realisations of one site.
+	NoZones bool
+}
+
+// Limit returns the zone depth limit, m: ZoneLimit, or Radius/2 when it is 0.
+func (t *Tunnel) Limit() float64 {
+	if t.ZoneLimit == 0 {
+		return t.Radius / 2
+	}
+	return t.ZoneLimit
 }
 
 // Station is a point of the alignment where the tunnel is screened.

@@ -29,6 +29,7 @@ type Report struct {
 	// SlopeReadings is the field readings against the slope's tests, or nil.
 	SlopeReadings *Table
 	Tunnel        *Table // the tunnel screening, or nil
+	Zones         *Table // the tunnel's slip zones, shown before Tunnel, or nil
 	Figures       []Figure
 	Criterion     string // the site criterion in words
 	Caution       string

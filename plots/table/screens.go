@@ -112,11 +112,43 @@ func Wall(sc *tunnel.Screening) [][]string {
 // Profile is profile.csv: one row per station.
 func Profile(sc *tunnel.Screening) [][]string {
 	rows := [][]string{{"chainage", "trend", "plunge", "cover_m", "depth_m", "pore_pressure_mpa", "sigma_theta_max_mpa", "sigma_theta_max_at_deg",
-		"sigma_theta_min_mpa", "sigma_theta_min_at_deg", "sigma_max_mpa", "sigma_max_at_deg", "sigma_max_to_ucs", "spalling"}}
+		"sigma_theta_min_mpa", "sigma_theta_min_at_deg", "sigma_max_mpa", "sigma_max_at_deg", "sigma_max_to_ucs", "spalling",
+		"slip_zone_depth_max_m", "slip_zone_depth_max_set", "slip_zone_depth_max_extent"}}
 	for _, st := range sc.Stations {
-		rows = append(rows, []string{Cell(st.Chainage), Cell(st.Trend), Cell(st.Plunge), Cell(st.Cover), Cell(st.Depth), Cell(st.State.PorePressure),
+		row := []string{Cell(st.Chainage), Cell(st.Trend), Cell(st.Plunge), Cell(st.Cover), Cell(st.Depth), Cell(st.State.PorePressure),
 			Cell(st.ThetaMax.Stress), Cell(st.ThetaMax.Theta), Cell(st.ThetaMin.Stress), Cell(st.ThetaMin.Theta),
-			Cell(st.WallMax.Stress), Cell(st.WallMax.Theta), Cell(st.Ratio), words.Spalling(opening.SpallingOf(st.Ratio))})
+			Cell(st.WallMax.Stress), Cell(st.WallMax.Theta), Cell(st.Ratio), words.Spalling(opening.SpallingOf(st.Ratio)), "", "", ""}
+		if k := st.Deepest(); k >= 0 {
+			r := &st.Rows[k]
+			row[14], row[15], row[16] = Cell(r.Zone.Depth), sc.Targets[k].Name, r.Extent().String()
+		}
+		rows = append(rows, row)
+	}
+	return rows
+}
+
+// ZoneColumns are the columns of zones.csv.
+var ZoneColumns = []string{"chainage", "set", "slip_zone_depth_m", "slip_zone_at_deg", "slip_zone_area_m2", "opening_zone_depth_m",
+	"slip_zone_at_wall", "slip_zone_extent"}
+
+// Zones is zones.csv: the slip zone of each target at each station, empty
+// cells where there is no zone (or no opening part).
+func Zones(sc *tunnel.Screening) [][]string {
+	rows := [][]string{ZoneColumns}
+	for _, st := range sc.Stations {
+		for i := range st.Rows {
+			r := &st.Rows[i]
+			z := &r.Zone
+			row := []string{Cell(st.Chainage), sc.Targets[i].Name, "", "", "", "", "", r.Extent().String()}
+			if z.Flags.Has(tunnel.Exists) {
+				row[2], row[3], row[4], row[5] = Cell(z.Depth), Cell(z.Angle), Cell(z.Area), Cell(z.OpeningDepth)
+				row[6] = "no"
+				if z.Flags.Has(tunnel.AtWall) {
+					row[6] = "yes"
+				}
+			}
+			rows = append(rows, row)
+		}
 	}
 	return rows
 }

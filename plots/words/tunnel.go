@@ -54,14 +54,18 @@ func Stretches(ss []tunnel.Stretch) string {
 }
 
 // TunnelLines puts the screening in sentences: the alignment, the largest
-// tangential stress, and for each plane or set its class on each leg, the
-// far-field stretches and the wall.
+// tangential stress, and for each plane or set its slip zone (the deepest,
+// where it has no bound, the stretches deeper than the limit), its class on
+// each leg and the wall. ZoneMethod and ZoneCaution go with them.
 func TunnelLines(sc *tunnel.Screening) []string {
 	t := sc.Tunnel
 	first, last := sc.Stations[0], sc.Stations[len(sc.Stations)-1]
 	wall := "drained (Pp = 0)"
 	if !t.Drained {
 		wall = "at the far-field Pp"
+	}
+	if t.Support > 0 {
+		wall += fmt.Sprintf(", support pressure %g MPa", t.Support)
 	}
 	out := []string{fmt.Sprintf("Tunnel: chainage %g to %g m, %d stations every %g m, radius %g m, UCS %g MPa, wall %s.",
 		first.Chainage, last.Chainage, len(sc.Stations), t.Spacing, t.Radius, t.UCS, wall)}
@@ -73,17 +77,21 @@ func TunnelLines(sc *tunnel.Screening) []string {
 	}
 	out = append(out, l)
 	for i, tg := range sc.Targets {
-		far := sc.Stretches(func(r *tunnel.Result) bool { return r.Rows[i].Far.State != planes.Stable })
 		walls := sc.Stretches(func(r *tunnel.Result) bool { return len(r.Rows[i].Critical) > 0 || len(r.Rows[i].Opening) > 0 })
 		var classes []string
 		for k, leg := range t.Legs {
 			d := tunnel.ClassifyDrive(tg.Orientation, leg.Trend)
 			classes = append(classes, fmt.Sprintf("%s on leg %d (drive %03.0f°)", d.Class, k+1, leg.Trend))
 		}
-		line := fmt.Sprintf("%s (%s): %s", tg.Name, tg.Orientation, strings.Join(classes, ", "))
-		if len(far) > 0 {
-			line += fmt.Sprintf("; critical or opening in the far field at %s m", Stretches(far))
+		line := fmt.Sprintf("%s (%s): ", tg.Name, tg.Orientation)
+		if t.NoZones {
+			if far := sc.Stretches(func(r *tunnel.Result) bool { return r.Rows[i].Far.State != planes.Stable }); len(far) > 0 {
+				line += fmt.Sprintf("critical or opening in the far field at %s m; ", Stretches(far))
+			}
+		} else {
+			line += zoneClause(sc, i) + "; "
 		}
+		line += strings.Join(classes, ", ")
 		switch {
 		case len(walls) == 1 && walls[0].From == first.Chainage && walls[0].To == last.Chainage:
 			r := w.Rows[i]
