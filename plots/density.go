@@ -216,6 +216,10 @@ func (d *DensityNet) drawKey(c draw.Canvas, hi float64) {
 	row(func(a vg.Point) { axisGlyph(&c, 1, a) }, "set mean pole, with its α95 cone")
 	for _, s := range d.Sets {
 		l := s.Mean.Pole()
-		row(func(vg.Point) {}, fmt.Sprintf("%s: %s, pole %s, α95 %.1f°, n = %d", s.Name, s.Mean, fmtLine(l.Trend, l.Plunge), s.Alpha95, s.Count))
+		alpha := "α95 —" // one reading: no cone
+		if !math.IsNaN(s.Alpha95) {
+			alpha = fmt.Sprintf("α95 %.1f°", s.Alpha95)
+		}
+		row(func(vg.Point) {}, fmt.Sprintf("%s: %s, pole %s, %s, n = %d", s.Name, s.Mean, fmtLine(l.Trend, l.Plunge), alpha, s.Count))
 	}
 }

@@ -3,10 +3,13 @@ package main
 import (
 	"bufio"
 	"bytes"
+	"errors"
 	"fmt"
 	"io"
 	"os"
 	"path/filepath"
+	"strconv"
+	"strings"
 
 	"cleft/plots"
 	"cleft/plots/table"
@@ -15,37 +18,104 @@ import (
 )
 
 // writeFile writes path through fn atomically: into a temporary file in the
-// same folder, renamed over path only when fn and every write succeeded, so
-// a failed run never leaves a half-written output.
+// same folder (.NAME.PID-RANDOM.tmp), renamed over path only when fn and
+// every write succeeded, so a failed run never leaves a half-written output
+// and the temporary file is removed however fn ends, a panic included.
+// Temporary files of path left by runs that were killed (their process is
+// gone) are removed first. A failed write names path, not the temporary
+// file.
 func writeFile(path string, fn func(w io.Writer) error) (err error) {
 	dir := filepath.Dir(path)
-	tmp, err := os.CreateTemp(dir, "."+filepath.Base(path)+".*.tmp")
+	removeStale(dir, filepath.Base(path))
+	tmp, err := os.CreateTemp(dir, tempPrefix(filepath.Base(path))+strconv.Itoa(os.Getpid())+"-*.tmp")
 	if err != nil {
 		return fmt.Errorf("%s: cannot write: %w", path, unwrapPath(err))
 	}
+	done := false
 	defer func() {
-		if err != nil {
+		if !done {
 			tmp.Close()
 			os.Remove(tmp.Name())
 		}
 	}()
 	bw := bufio.NewWriterSize(tmp, 1<<16)
 	if err = fn(bw); err != nil {
-		return err
+		return outputError(path, tmp.Name(), err)
 	}
 	if err = bw.Flush(); err != nil {
-		return fmt.Errorf("%s: %w", path, err)
+		return outputError(path, tmp.Name(), err)
 	}
 	if err = tmp.Chmod(0o644); err != nil {
-		return fmt.Errorf("%s: %w", path, err)
+		return outputError(path, tmp.Name(), err)
 	}
 	if err = tmp.Close(); err != nil {
-		return fmt.Errorf("%s: %w", path, err)
+		return outputError(path, tmp.Name(), err)
 	}
 	if err = os.Rename(tmp.Name(), path); err != nil {
-		return fmt.Errorf("%s: %w", path, err)
+		return fmt.Errorf("%s: cannot write: %w", path, unwrapPath(err))
 	}
+	done = true
 	return nil
+}
+
+// tempPrefix is the start of the names of path's temporary files: the
+// hidden name, then the writer's process id.
+func tempPrefix(base string) string { return "." + base + "." }
+
+// outputError is err from writing the temporary file tmp of path, as the
+// user should read it: about path (a full disk says "no space left on
+// device" of the output, not of a hidden file). Other errors (a bad input
+// row, say) pass through.
+func outputError(path, tmp string, err error) error {
+	var pe *os.PathError
+	if errors.As(err, &pe) && pe.Path == tmp {
+		return fmt.Errorf("%s: cannot write: %w", path, pe.Err)
+	}
+	return err
+}
+
+// removeStale removes the temporary files of base in dir that no running
+// process is writing: .BASE.PID-RANDOM.tmp of a process that is gone, and
+// .BASE.RANDOM.tmp of earlier versions. Errors are ignored: it is tidying.
+func removeStale(dir, base string) {
+	entries, err := os.ReadDir(dir)
+	if err != nil {
+		return
+	}
+	prefix := tempPrefix(base)
+	for _, e := range entries {
+		rest, ok := strings.CutPrefix(e.Name(), prefix)
+		if !ok || e.IsDir() {
+			continue
+		}
+		rest, ok = strings.CutSuffix(rest, ".tmp")
+		if !ok {
+			continue
+		}
+		pid, random, withPid := strings.Cut(rest, "-")
+		if !withPid {
+			random = pid
+		}
+		if !digits(random) || (withPid && !digits(pid)) {
+			continue
+		}
+		if withPid {
+			if n, err := strconv.Atoi(pid); err != nil || processAlive(n) {
+				continue
+			}
+		}
+		os.Remove(filepath.Join(dir, e.Name()))
+	}
+}
+
+// digits reports whether s is one or more ASCII digits.
+func digits(s string) bool {
+	for i := 0; i < len(s); i++ {
+		if s[i] < '0' || s[i] > '9' {
+			return false
+		}
+	}
+	return s != ""
 }
 
 func unwrapPath(err error) error {

@@ -94,7 +94,7 @@ type Figure struct {
 var page string
 
 var tmpl = template.Must(template.New("report").Funcs(template.FuncMap{
-	"inc":     func(i int) int { return i + 1 },
+	"inc": func(i int) int { return i + 1 },
 	"cls": func(t *Table, i int) template.HTMLAttr {
 		switch {
 		case i < len(t.Numeric) && t.Numeric[i]:
