@@ -5,6 +5,7 @@ import (
 	"image/color"
 	"math"
 	"strconv"
+	"strings"
 
 	"cleft/insitu"
 	"cleft/planes"
@@ -40,7 +41,8 @@ type Mohr struct {
 	State     insitu.State
 	Points    []MohrPoint
 	Envelopes []Envelope
-	// Note is a line under the title saying how the points were placed.
+	// Note is a line under the title saying how the points were placed
+	// (more lines when it holds line breaks).
 	Note string
 }
 
@@ -83,7 +85,7 @@ func (m *Mohr) Draw(c draw.Canvas) {
 	c = draw.Crop(c, margin, -margin, margin, -margin)
 	lines := []string{m.Site, fmt.Sprintf("Mohr diagram of effective stress at %g m", m.Depth), m.Model}
 	if m.Note != "" {
-		lines = append(lines, m.Note)
+		lines = append(lines, strings.Split(m.Note, "\n")...)
 	}
 	th := titleBlock(&c, lines) + vg.Points(4)
 	body := draw.Crop(c, 0, 0, 0, -th)

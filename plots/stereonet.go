@@ -39,6 +39,8 @@ type Stereonet struct {
 	Grid      bool      // draw a 10° polar grid (plunge circles, trend radials)
 	Contours  []float64 // levels; nil for the measure's defaults
 	Poles     []Pole
+	// Note is a line under the title, or "" (how many planes are left out).
+	Note string
 	// Means are planes drawn only as dashed great circles (the mean planes
 	// of joint sets), named at their east end.
 	Means []Pole
@@ -144,6 +146,9 @@ func (s *Stereonet) Draw(c draw.Canvas) {
 		fmt.Sprintf("Poles to %d planes coloured by %s at their own depths; background: every orientation at %g m", len(s.Poles), m.Label(), s.Depth),
 		s.Model,
 		"Lower-hemisphere " + s.Proj.Name()[:len(s.Proj.Name())-len(", lower hemisphere")] + "; poles to planes",
+	}
+	if s.Note != "" {
+		lines = append(lines, s.Note)
 	}
 	th := titleBlock(&c, lines) + vg.Points(6)
 	body := draw.Crop(c, 0, 0, 0, -th)

@@ -150,7 +150,7 @@ func stereonet(a *assess.Assessment, o figureOptions, w, h float64) *plots.Stere
 		st.Poles = append(st.Poles, plots.Pole{Name: p.Name, Orientation: p.Orientation, Result: a.Results[i], Trace: trace[i]})
 	}
 	if n := hiddenNote(a, idx, trace, o.traces); n != "" {
-		st.Model += "; " + n
+		st.Note = strings.ToUpper(n[:1]) + n[1:]
 	}
 	if o.traces != "none" {
 		for _, s := range a.Sets {
@@ -179,7 +179,7 @@ func mohr(a *assess.Assessment, o figureOptions) *plots.Mohr {
 	rv := s.Resolver()
 	idx, _ := drawn(a, "none")
 	if len(idx) < len(a.Planes) {
-		m.Note += fmt.Sprintf("; the %d least stable of %d planes are drawn", len(idx), len(a.Planes))
+		m.Note += fmt.Sprintf("\nThe %d least stable of %d planes are drawn", len(idx), len(a.Planes))
 	}
 	for _, i := range idx {
 		p := &a.Planes[i]

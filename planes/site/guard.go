@@ -2,6 +2,7 @@ package site
 
 import (
 	"bufio"
+	"bytes"
 	"encoding/csv"
 	"errors"
 	"fmt"
@@ -60,33 +61,58 @@ func (g *guard) Read(p []byte) (int, error) {
 		}
 	}
 	n, err := g.r.Read(p)
-	for i := 0; i < n; i++ {
-		c := p[i]
+	quote := -1 // index in p of the next quote at or after i, once looked for
+	for i := 0; i < n; {
 		if g.lineStart && !g.quoted {
-			g.comment = c == '#'
+			g.comment = p[i] == '#'
 			if g.rowBytes == 0 {
 				g.rowLine = g.line
 			}
 		}
 		g.lineStart = false
-		g.rowBytes++
-		switch {
-		case c == '\n':
+		// The next byte that matters: a line break, or (outside comments)
+		// a quote.
+		j := bytes.IndexByte(p[i:n], '\n')
+		if j >= 0 {
+			j += i
+		} else {
+			j = n
+		}
+		if !g.comment {
+			if quote < i {
+				if quote = bytes.IndexByte(p[i:n], '"'); quote >= 0 {
+					quote += i
+				} else {
+					quote = n
+				}
+			}
+			j = min(j, quote)
+		}
+		if j == n { // nothing more in this read
+			g.rowBytes += n - i
+			if g.rowBytes > MaxRow {
+				g.err = g.tooLong()
+				return max(0, n-(g.rowBytes-MaxRow)), g.err
+			}
+			break
+		}
+		g.rowBytes += j + 1 - i
+		if g.rowBytes > MaxRow {
+			g.err = g.tooLong()
+			return max(0, j+1-(g.rowBytes-MaxRow)), g.err
+		}
+		i = j + 1
+		if p[j] == '\n' {
 			g.line++
 			g.lineStart = true
 			if !g.quoted {
 				g.rowBytes, g.comment = 0, false
 			}
-		case g.comment:
-		case c == '"':
-			g.quoted = !g.quoted
-			if g.quoted {
-				g.quoteLine = g.line
-			}
+			continue
 		}
-		if g.rowBytes > MaxRow {
-			g.err = g.tooLong()
-			return i, g.err
+		g.quoted = !g.quoted
+		if g.quoted {
+			g.quoteLine = g.line
 		}
 	}
 	if err == io.EOF {

@@ -265,7 +265,7 @@ func (ps *PlaneStream) Next(p *Plane) error {
 		}
 		*p = q
 		p.Extras = extras
-		ps.names.add(p, ps.siteFile)
+		ps.names.add(p, false, ps.siteFile)
 		return nil
 	}
 	if ps.table == nil {
@@ -277,7 +277,7 @@ func (ps *PlaneStream) Next(p *Plane) error {
 	for range ps.pad {
 		p.Extras = append(p.Extras, "")
 	}
-	ps.names.add(p, ps.tableName)
+	ps.names.add(p, true, ps.tableName)
 	return nil
 }
 
