@@ -21,8 +21,8 @@ import (
 // same folder (.NAME.PID-RANDOM.tmp), renamed over path only when fn and
 // every write succeeded, so a failed run never leaves a half-written output
 // and the temporary file is removed however fn ends, a panic included.
-// Temporary files of path left by runs that were killed (their process is
-// gone) are removed first. A failed write names path, not the temporary
+// Temporary files in the folder left by runs that were killed (their
+// process is gone) are removed first. A failed write names path, not the temporary
 // file.
 func writeFile(path string, fn func(w io.Writer) error) (err error) {
 	dir := filepath.Dir(path)
@@ -74,37 +74,34 @@ func outputError(path, tmp string, err error) error {
 	return err
 }
 
-// removeStale removes the temporary files of base in dir that no running
-// process is writing: .BASE.PID-RANDOM.tmp of a process that is gone, and
-// .BASE.RANDOM.tmp of earlier versions. Errors are ignored: it is tidying.
+// removeStale removes the temporary files in dir that no running process is
+// writing: any .NAME.PID-RANDOM.tmp (cleft's own pattern) of a process that
+// is gone, and .BASE.RANDOM.tmp of base written by earlier versions. Errors
+// are ignored: it is tidying.
 func removeStale(dir, base string) {
 	entries, err := os.ReadDir(dir)
 	if err != nil {
 		return
 	}
-	prefix := tempPrefix(base)
+	old := tempPrefix(base)
 	for _, e := range entries {
-		rest, ok := strings.CutPrefix(e.Name(), prefix)
-		if !ok || e.IsDir() {
+		name := e.Name()
+		rest, ok := strings.CutSuffix(name, ".tmp")
+		if !ok || e.IsDir() || !strings.HasPrefix(name, ".") {
 			continue
 		}
-		rest, ok = strings.CutSuffix(rest, ".tmp")
-		if !ok {
+		if r, ok := strings.CutPrefix(rest, old); ok && digits(r) { // an earlier version's
+			os.Remove(filepath.Join(dir, name))
 			continue
 		}
-		pid, random, withPid := strings.Cut(rest, "-")
-		if !withPid {
-			random = pid
-		}
-		if !digits(random) || (withPid && !digits(pid)) {
+		i := strings.LastIndexByte(rest, '.')
+		pid, random, ok := strings.Cut(rest[i+1:], "-")
+		if i <= 0 || !ok || !digits(pid) || !digits(random) {
 			continue
 		}
-		if withPid {
-			if n, err := strconv.Atoi(pid); err != nil || processAlive(n) {
-				continue
-			}
+		if n, err := strconv.Atoi(pid); err == nil && !processAlive(n) {
+			os.Remove(filepath.Join(dir, name))
 		}
-		os.Remove(filepath.Join(dir, e.Name()))
 	}
 }
 

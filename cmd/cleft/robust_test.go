@@ -192,8 +192,8 @@ func TestWriteFileLeavesNothingBehind(t *testing.T) {
 		// 4194999 is above the largest process id Linux hands out
 		// (PID_MAX_LIMIT, 2²², common practice), so no process has it.
 		own := fmt.Sprintf(".out.csv.%d-77.tmp", os.Getpid())
-		stale := []string{".out.csv.4194999-123.tmp", ".out.csv.756341328.tmp"}
-		kept := []string{own, ".other.csv.4194999-1.tmp", ".out.csv.notes.tmp", "out.csv.1.tmp"}
+		stale := []string{".out.csv.4194999-123.tmp", ".out.csv.756341328.tmp", ".f.png.4194999-1.tmp"}
+		kept := []string{own, ".f.png.756341328.tmp", ".out.csv.notes.tmp", "out.csv.1.tmp", ".x.4194999.tmp"}
 		for _, n := range append(append([]string(nil), stale...), kept...) {
 			os.WriteFile(filepath.Join(dir, n), []byte("x"), 0o644)
 		}
@@ -440,5 +440,36 @@ func TestOutputListsAreComplete(t *testing.T) {
 				}
 			}
 		})
+	}
+}
+
+func TestAssessHoldsBoundedTables(t *testing.T) {
+	// assess holds its planes in memory: more than 200,000, or more than
+	// 64 MiB of names and carried values, is an error (resolve streams them).
+	if testing.Short() {
+		t.Skip("generates 70 MB of tables")
+	}
+	var many, wide strings.Builder
+	many.WriteString("name,dip,dip_direction\n")
+	for i := range 200001 {
+		fmt.Fprintf(&many, "P%d,%d,%d\n", i, i%90, i%360)
+	}
+	note := strings.Repeat("n", 60<<10)
+	wide.WriteString("name,dip,dip_direction,note\n")
+	for i := range 1200 {
+		fmt.Fprintf(&wide, "P%d,%d,%d,%s\n", i, i%90, i%360, note)
+	}
+	dir := files(t, map[string]string{
+		"many.yaml": robustSite + "planes_file: many.csv\n", "many.csv": many.String(),
+		"wide.yaml": robustSite + "planes_file: wide.csv\n", "wide.csv": wide.String(),
+	})
+	for _, c := range []struct{ site, want string }{
+		{"many.yaml", "many.csv:200002: more than 200000 planes or 64 MiB of names and carried values"},
+		{"wide.yaml", "wide.csv:1094: more than 200000 planes or 64 MiB of names and carried values"},
+	} {
+		code, _, stderr := cleft(t, "", "assess", filepath.Join(dir, c.site), "--out", filepath.Join(dir, "o"))
+		if code != 1 || !strings.Contains(oneMessage(t, stderr), c.want) {
+			t.Errorf("%s: exit %d, stderr %q; want %q", c.site, code, stderr, c.want)
+		}
 	}
 }

@@ -63,6 +63,7 @@ func New(s *site.Site) (*Assessment, error) {
 	defer ps.Close()
 	a := &Assessment{Site: s, Extras: ps.ExtraNames, Inputs: []Input{{Name: s.File, SHA256: s.SHA256}}}
 	rv := s.Resolver()
+	held := 0
 	for {
 		var p site.Plane
 		if err := ps.Next(&p); err != nil {
@@ -71,9 +72,10 @@ func New(s *site.Site) (*Assessment, error) {
 			}
 			return nil, err
 		}
-		if len(a.Planes) == MaxPlanes {
+		held += p.TextSize()
+		if len(a.Planes) == MaxPlanes || held > site.MaxHeldText {
 			name, _ := ps.Table()
-			return nil, &site.Error{File: name, Line: p.Line, Err: site.ErrLimit, Msg: fmt.Sprintf("more than %d planes: an assessment holds at most %d; cleft resolve streams a table of any length", MaxPlanes, MaxPlanes)}
+			return nil, &site.Error{File: name, Line: p.Line, Err: site.ErrLimit, Msg: fmt.Sprintf("more than %d planes or %d MiB of names and carried values: an assessment holds no more; cleft resolve streams a table of any length", MaxPlanes, site.MaxHeldText>>20)}
 		}
 		var r planes.Result
 		rv.Resolve(&p, &r)

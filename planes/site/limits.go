@@ -28,4 +28,5 @@ const (
 	MaxStations     = 10000    // stations along a tunnel
 	MaxReportDepths = 50       // report.depths
 	MaxCrackFill    = 10       // slope water cases
+	MaxHeldText     = 64 << 20 // bytes of names and carried values of the planes or readings held in memory at once
 )

@@ -22,6 +22,16 @@ type Plane struct {
 	Extras []string
 }
 
+// TextSize is the number of bytes of the plane's name and carried values,
+// for a caller that holds many planes to bound (see MaxHeldText).
+func (p *Plane) TextSize() int {
+	n := len(p.Name)
+	for _, e := range p.Extras {
+		n += len(e)
+	}
+	return n
+}
+
 // The columns a plane may give, in both the CSV table and inline YAML.
 const (
 	colName = iota

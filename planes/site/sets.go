@@ -82,6 +82,7 @@ func ReadReadings(r io.Reader, name string, depth float64, hasDepth bool) ([]Pla
 		return nil, nil, "", err
 	}
 	var out []Plane
+	held := 0
 	for {
 		var p Plane
 		if err := rd.Next(&p); err != nil {
@@ -89,6 +90,9 @@ func ReadReadings(r io.Reader, name string, depth float64, hasDepth bool) ([]Pla
 				break
 			}
 			return nil, nil, "", err
+		}
+		if held += p.TextSize(); held > MaxHeldText {
+			return nil, nil, "", &Error{File: name, Line: p.Line, Err: ErrLimit, Msg: fmt.Sprintf("the readings hold more than %d MiB of names and other values: split the table", MaxHeldText>>20)}
 		}
 		if len(out) == MaxReadings {
 			return nil, nil, "", &Error{File: name, Line: p.Line, Err: ErrLimit, Msg: fmt.Sprintf("more than %d readings: cleft groups at most %d into sets; split the table (by borehole or domain)", MaxReadings, MaxReadings)}
