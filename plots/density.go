@@ -197,7 +197,11 @@ func (d *DensityNet) key(hi float64) *keyBox {
 	)
 	for _, s := range d.Sets {
 		l := s.Mean.Pole()
-		kb.rows = append(kb.rows, keyRow{text: fmt.Sprintf("%s: %s, pole %s, α95 %.1f°, n = %d", s.Name, s.Mean, fmtLine(l.Trend, l.Plunge), s.Alpha95, s.Count)})
+		alpha := "α95 —" // one reading: no cone
+		if !math.IsNaN(s.Alpha95) {
+			alpha = fmt.Sprintf("α95 %.1f°", s.Alpha95)
+		}
+		kb.rows = append(kb.rows, keyRow{text: fmt.Sprintf("%s: %s, pole %s, %s, n = %d", s.Name, s.Mean, fmtLine(l.Trend, l.Plunge), alpha, s.Count)})
 	}
 	return kb
 }

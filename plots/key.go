@@ -97,8 +97,11 @@ func hasTrace(ps []Pole) bool {
 	return false
 }
 
+// fmtLine writes a line as TTT/PP in whole degrees, the trend in [0, 360)
+// (a trend a hair below 0 is 000, not -00).
 func fmtLine(trend, plunge float64) string {
-	return fmt.Sprintf("%03.0f/%02.0f", trend, plunge)
+	t := math.Mod(math.Round(trend)+360, 360) + 0
+	return fmt.Sprintf("%03.0f/%02.0f", t, math.Round(plunge)+0)
 }
 
 // tendencyBar is the stereonet's colour bar, values rising to the right:

@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"image/color"
 	"math"
+	"strings"
 
 	"cleft/insitu"
 	"cleft/planes"
@@ -46,7 +47,8 @@ type Mohr struct {
 	State     insitu.State
 	Points    []MohrPoint
 	Envelopes []Envelope
-	// Note is a line under the title saying how the points were placed.
+	// Note is a line under the title saying how the points were placed
+	// (more lines when it holds line breaks).
 	Note string
 
 	dropped int // names left out for want of room, in the last Draw
@@ -95,7 +97,7 @@ func sub(c draw.Canvas, r vg.Rectangle) draw.Canvas {
 func (m *Mohr) title() []string {
 	lines := []string{m.Site, fmt.Sprintf("Mohr diagram of effective stress at %g m", m.Depth), m.Model}
 	if m.Note != "" {
-		lines = append(lines, m.Note)
+		lines = append(lines, strings.Split(m.Note, "\n")...)
 	}
 	return lines
 }

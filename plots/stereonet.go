@@ -40,6 +40,8 @@ type Stereonet struct {
 	Grid      bool      // draw a 10° polar grid (plunge circles, trend radials)
 	Contours  []float64 // levels; nil for the measure's defaults
 	Poles     []Pole
+	// Note is a line under the title, or "" (how many planes are left out).
+	Note string
 	// Means are planes drawn only as dashed great circles (the mean planes
 	// of joint sets), named at one end.
 	Means []Pole
@@ -144,12 +146,16 @@ func (s *Stereonet) edges(lo, hi float64) []float64 {
 func (s *Stereonet) title() []string {
 	m := s.Measure
 	proj := s.Proj.Name()[:len(s.Proj.Name())-len(", lower hemisphere")]
-	return []string{
+	lines := []string{
 		s.Site,
 		fmt.Sprintf("%s coloured by %s at their own depths; bands: every orientation at %g m", polesTo(len(s.Poles)), m.Label(), s.Depth),
 		s.Model,
 		"Lower-hemisphere " + proj + "; poles to planes",
 	}
+	if s.Note != "" {
+		lines = append(lines, s.Note)
+	}
+	return lines
 }
 
 // polesTo is "Poles to n planes", or "Pole to 1 plane".

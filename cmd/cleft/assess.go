@@ -19,6 +19,7 @@ type assessOptions struct {
 	site    string
 	example bool
 	out     string
+	warn    io.Writer // standard error, for warnings
 }
 
 func newAssessCmd() *cobra.Command {
@@ -49,6 +50,7 @@ least stable three, and the frictional-limit check of the stress model.
 			if len(args) == 1 {
 				o.site = args[0]
 			}
+			o.warn = cmd.ErrOrStderr()
 			return runAssess(o, cmd.OutOrStdout())
 		},
 	}
@@ -87,14 +89,24 @@ func runAssess(o assessOptions, stdout io.Writer) error {
 	if o.out == "" {
 		return usagef("give --out DIR, the folder for the outputs")
 	}
+	outs := inDir(o.out, assessFiles())
+	if err := refuseInputs(outs, o.site); err != nil {
+		return err
+	}
 	s, err := loadSite(o.example, o.site)
 	if err != nil {
 		return err
+	}
+	if !o.example {
+		if err := refuseInputs(outs, siteInputs(s)...); err != nil {
+			return err
+		}
 	}
 	a, err := screenAll(s)
 	if err != nil {
 		return err
 	}
+	warnRepeats(o.warn, a.Repeat, a.Repeats, false)
 	if err := makeDir(o.out); err != nil {
 		return err
 	}
@@ -148,12 +160,13 @@ func runAssess(o assessOptions, stdout io.Writer) error {
 
 // planeTable writes the plane table of an assessment.
 func planeTable(w io.Writer, a *assess.Assessment, f table.Format) error {
-	if _, err := w.Write(table.Header(f, a.Extras)); err != nil {
+	names := table.Carried(table.Columns, a.Extras)
+	if _, err := w.Write(table.Header(f, names)); err != nil {
 		return err
 	}
 	var buf []byte
 	for i := range a.Planes {
-		buf = table.AppendRow(buf[:0], f, &a.Planes[i], &a.Results[i], a.Extras, i == 0)
+		buf = table.AppendRow(buf[:0], f, &a.Planes[i], &a.Results[i], names, i == 0)
 		if _, err := w.Write(buf); err != nil {
 			return err
 		}
@@ -176,10 +189,17 @@ func printSummary(b *strings.Builder, s *site.Site, f assess.Facts) {
 }
 
 // assessFor loads and assesses the site at path, which must have the block
-// a command screens (has); missing says what to give when it does not.
-func assessFor(path string, has func(*site.Site) bool, missing string) (*assess.Assessment, error) {
+// a command screens (has); missing says what to give when it does not. No
+// output in outs may be one of the site's inputs.
+func assessFor(path string, outs []string, has func(*site.Site) bool, missing string) (*assess.Assessment, error) {
+	if err := refuseInputs(outs, path); err != nil {
+		return nil, err
+	}
 	s, err := site.Load(path)
 	if err != nil {
+		return nil, err
+	}
+	if err := refuseInputs(outs, siteInputs(s)...); err != nil {
 		return nil, err
 	}
 	if !has(s) {

@@ -3,6 +3,7 @@ package main
 import (
 	"fmt"
 	"math"
+	"sort"
 	"strings"
 
 	"cleft/planes"
@@ -66,8 +67,69 @@ func checkTraces(a *assess.Assessment, which string) error {
 	return nil
 }
 
+// maxPoles is the most planes a stereonet or a Mohr diagram draws, and
+// maxTraces the most great circles: beyond them a figure shows nothing more
+// but grows without bound. The least stable are drawn, and the figure says
+// how many are not.
+const (
+	maxPoles  = 2000
+	maxTraces = 100
+)
+
+// drawn returns the indexes of the planes a figure draws, in input order:
+// every plane, or the maxPoles least stable; and which of them get their
+// great circle (which: see traced), at most maxTraces, the least stable.
+func drawn(a *assess.Assessment, which string) (idx []int, trace map[int]bool) {
+	rank := a.Ranked()
+	trace = map[int]bool{}
+	for _, i := range rank {
+		if len(trace) == maxTraces {
+			break
+		}
+		if traced(a, i, which) {
+			trace[i] = true
+		}
+	}
+	if len(rank) <= maxPoles {
+		idx = make([]int, len(rank))
+		for i := range idx {
+			idx[i] = i
+		}
+		return idx, trace
+	}
+	idx = append(idx, rank[:maxPoles]...)
+	sort.Ints(idx)
+	for i := range trace {
+		if j := sort.SearchInts(idx, i); j == len(idx) || idx[j] != i {
+			delete(trace, i)
+		}
+	}
+	return idx, trace
+}
+
+// hiddenNote says how many planes a figure leaves out, or "".
+func hiddenNote(a *assess.Assessment, idx []int, trace map[int]bool, which string) string {
+	var parts []string
+	if len(idx) < len(a.Planes) {
+		parts = append(parts, fmt.Sprintf("the %d least stable of %d planes are drawn", len(idx), len(a.Planes)))
+	}
+	if len(trace) == maxTraces {
+		n := 0
+		for i := range a.Planes {
+			if traced(a, i, which) {
+				n++
+			}
+		}
+		if n > maxTraces {
+			parts = append(parts, fmt.Sprintf("great circles of the %d least stable of %d", maxTraces, n))
+		}
+	}
+	return strings.Join(parts, "; ")
+}
+
 // stereonet builds the tendency stereonet for a figure of w × h, its field
 // computed at the figure depth with the site's water model and strength.
+// With more than maxPoles planes it draws the least stable.
 func stereonet(a *assess.Assessment, o figureOptions, w, h float64) *plots.Stereonet {
 	z := depthFor(a, o)
 	st := &plots.Stereonet{
@@ -82,8 +144,13 @@ func stereonet(a *assess.Assessment, o figureOptions, w, h float64) *plots.Stere
 		Contours:  o.contours,
 	}
 	st.Field = plots.NewField(st.State, st.Criterion, st.Measure, st.Proj, plots.FieldSize(cm(w, 0), cm(h, 0)))
-	for i, p := range a.Planes {
-		st.Poles = append(st.Poles, plots.Pole{Name: p.Name, Orientation: p.Orientation, Result: a.Results[i], Trace: traced(a, i, o.traces)})
+	idx, trace := drawn(a, o.traces)
+	for _, i := range idx {
+		p := &a.Planes[i]
+		st.Poles = append(st.Poles, plots.Pole{Name: p.Name, Orientation: p.Orientation, Result: a.Results[i], Trace: trace[i]})
+	}
+	if n := hiddenNote(a, idx, trace, o.traces); n != "" {
+		st.Note = strings.ToUpper(n[:1]) + n[1:]
 	}
 	if o.traces != "none" {
 		for _, s := range a.Sets {
@@ -93,9 +160,10 @@ func stereonet(a *assess.Assessment, o figureOptions, w, h float64) *plots.Stere
 	return st
 }
 
-// mohr builds the Mohr diagram at the figure depth: every plane resolved at
-// that depth (site.Resolver.ResolveAt), the site's envelope and one for each
-// distinct per-plane Coulomb criterion.
+// mohr builds the Mohr diagram at the figure depth: every plane (the
+// maxPoles least stable when there are more) resolved at that depth
+// (site.Resolver.ResolveAt), the site's envelope and one for each distinct
+// per-plane Coulomb criterion.
 func mohr(a *assess.Assessment, o figureOptions) *plots.Mohr {
 	z := depthFor(a, o)
 	s := a.Site
@@ -109,7 +177,11 @@ func mohr(a *assess.Assessment, o figureOptions) *plots.Mohr {
 	m.Envelopes = append(m.Envelopes, plots.Envelope{Label: "site strength: " + s.Criterion.String(), Criterion: s.Criterion})
 	seen := map[string]bool{s.Criterion.String(): true}
 	rv := s.Resolver()
-	for i := range a.Planes {
+	idx, _ := drawn(a, "none")
+	if len(idx) < len(a.Planes) {
+		m.Note += fmt.Sprintf("\nThe %d least stable of %d planes are drawn", len(idx), len(a.Planes))
+	}
+	for _, i := range idx {
 		p := &a.Planes[i]
 		var r planes.Result
 		c := rv.ResolveAt(p, z, &r)

@@ -3,10 +3,13 @@ package main
 import (
 	"bufio"
 	"bytes"
+	"errors"
 	"fmt"
 	"io"
 	"os"
 	"path/filepath"
+	"strconv"
+	"strings"
 
 	"cleft/plots"
 	"cleft/plots/table"
@@ -15,37 +18,101 @@ import (
 )
 
 // writeFile writes path through fn atomically: into a temporary file in the
-// same folder, renamed over path only when fn and every write succeeded, so
-// a failed run never leaves a half-written output.
+// same folder (.NAME.PID-RANDOM.tmp), renamed over path only when fn and
+// every write succeeded, so a failed run never leaves a half-written output
+// and the temporary file is removed however fn ends, a panic included.
+// Temporary files in the folder left by runs that were killed (their
+// process is gone) are removed first. A failed write names path, not the temporary
+// file.
 func writeFile(path string, fn func(w io.Writer) error) (err error) {
 	dir := filepath.Dir(path)
-	tmp, err := os.CreateTemp(dir, "."+filepath.Base(path)+".*.tmp")
+	removeStale(dir, filepath.Base(path))
+	tmp, err := os.CreateTemp(dir, tempPrefix(filepath.Base(path))+strconv.Itoa(os.Getpid())+"-*.tmp")
 	if err != nil {
 		return fmt.Errorf("%s: cannot write: %w", path, unwrapPath(err))
 	}
+	done := false
 	defer func() {
-		if err != nil {
+		if !done {
 			tmp.Close()
 			os.Remove(tmp.Name())
 		}
 	}()
 	bw := bufio.NewWriterSize(tmp, 1<<16)
 	if err = fn(bw); err != nil {
-		return err
+		return outputError(path, tmp.Name(), err)
 	}
 	if err = bw.Flush(); err != nil {
-		return fmt.Errorf("%s: %w", path, err)
+		return outputError(path, tmp.Name(), err)
 	}
 	if err = tmp.Chmod(0o644); err != nil {
-		return fmt.Errorf("%s: %w", path, err)
+		return outputError(path, tmp.Name(), err)
 	}
 	if err = tmp.Close(); err != nil {
-		return fmt.Errorf("%s: %w", path, err)
+		return outputError(path, tmp.Name(), err)
 	}
 	if err = os.Rename(tmp.Name(), path); err != nil {
-		return fmt.Errorf("%s: %w", path, err)
+		return fmt.Errorf("%s: cannot write: %w", path, unwrapPath(err))
 	}
+	done = true
 	return nil
+}
+
+// tempPrefix is the start of the names of path's temporary files: the
+// hidden name, then the writer's process id.
+func tempPrefix(base string) string { return "." + base + "." }
+
+// outputError is err from writing the temporary file tmp of path, as the
+// user should read it: about path (a full disk says "no space left on
+// device" of the output, not of a hidden file). Other errors (a bad input
+// row, say) pass through.
+func outputError(path, tmp string, err error) error {
+	var pe *os.PathError
+	if errors.As(err, &pe) && pe.Path == tmp {
+		return fmt.Errorf("%s: cannot write: %w", path, pe.Err)
+	}
+	return err
+}
+
+// removeStale removes the temporary files in dir that no running process is
+// writing: any .NAME.PID-RANDOM.tmp (cleft's own pattern) of a process that
+// is gone, and .BASE.RANDOM.tmp of base written by earlier versions. Errors
+// are ignored: it is tidying.
+func removeStale(dir, base string) {
+	entries, err := os.ReadDir(dir)
+	if err != nil {
+		return
+	}
+	old := tempPrefix(base)
+	for _, e := range entries {
+		name := e.Name()
+		rest, ok := strings.CutSuffix(name, ".tmp")
+		if !ok || e.IsDir() || !strings.HasPrefix(name, ".") {
+			continue
+		}
+		if r, ok := strings.CutPrefix(rest, old); ok && digits(r) { // an earlier version's
+			os.Remove(filepath.Join(dir, name))
+			continue
+		}
+		i := strings.LastIndexByte(rest, '.')
+		pid, random, ok := strings.Cut(rest[i+1:], "-")
+		if i <= 0 || !ok || !digits(pid) || !digits(random) {
+			continue
+		}
+		if n, err := strconv.Atoi(pid); err == nil && !processAlive(n) {
+			os.Remove(filepath.Join(dir, name))
+		}
+	}
+}
+
+// digits reports whether s is one or more ASCII digits.
+func digits(s string) bool {
+	for i := 0; i < len(s); i++ {
+		if s[i] < '0' || s[i] > '9' {
+			return false
+		}
+	}
+	return s != ""
 }
 
 func unwrapPath(err error) error {

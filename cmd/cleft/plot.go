@@ -5,6 +5,7 @@ import (
 	"strings"
 
 	"cleft/planes/assess"
+	"cleft/planes/site"
 	"cleft/plots"
 
 	"github.com/spf13/cobra"
@@ -58,14 +59,14 @@ Measures: ` + strings.Join(plots.Measures(), ", ") + `.
 	f.BoolVar(&o.example, "example", false, "plot the built-in demo site (invented data)")
 	f.StringVar(&o.kind, "kind", "stereonet", "stereonet or mohr")
 	f.StringVar(&o.measure, "measure", "slip-tendency", "stereonet colour: "+strings.Join(plots.Measures(), ", "))
-	f.Float64Var(&o.depth, "depth", math.NaN(), "depth below ground of the field and the Mohr circles, m")
+	floatVar(f, &o.depth, "depth", math.NaN(), "depth below ground of the field and the Mohr circles, m")
 	f.StringVar(&o.projection, "projection", "equal-area", "equal-area or equal-angle (lower hemisphere)")
 	f.BoolVar(&o.grid, "grid", false, "draw a 10° grid of plunge circles and trend radials")
-	f.Float64SliceVar(&o.contours, "contours", nil, "contour levels of the measure, e.g. 0.2,0.4,0.6")
+	floatsVar(f, &o.contours, "contours", "contour levels of the measure, e.g. 0.2,0.4,0.6")
 	f.StringVar(&o.traces, "great-circles", "unstable", "great circles to draw: unstable, all, none, or plane names")
 	f.StringVar(&o.out, "out", "", "output file: .png, .svg or .pdf")
-	f.Float64Var(&o.width, "width", 0, "figure width, cm (default 19 for a stereonet, 17 for a Mohr diagram)")
-	f.Float64Var(&o.height, "height", 0, "figure height, cm (default 13.5 for a stereonet, 12 for a Mohr diagram)")
+	floatVar(f, &o.width, "width", 0, "figure width, cm, 4 to 100 (default 19 for a stereonet, 17 for a Mohr diagram)")
+	floatVar(f, &o.height, "height", 0, "figure height, cm, 4 to 100 (default 13.5 for a stereonet, 12 for a Mohr diagram)")
 	return c
 }
 
@@ -87,22 +88,40 @@ func runPlot(o plotOptions, cmd *cobra.Command) error {
 	if err != nil {
 		return usageError{err}
 	}
-	if !math.IsNaN(o.depth) && (o.depth < 0 || math.IsInf(o.depth, 0)) {
-		return usagef("--depth %v: want a depth ≥ 0 m below ground", o.depth)
-	}
-	for _, v := range []float64{o.width, o.height} {
-		if v != 0 && (v < 4 || v > 100) {
-			return usagef("--width/--height %v cm: want 4 to 100 cm", v)
+	if !math.IsNaN(o.depth) {
+		if err := inRange("depth", o.depth, 0, site.MaxDepth, " m below ground"); err != nil {
+			return err
 		}
+	}
+	for i, v := range []float64{o.width, o.height} {
+		if v != 0 {
+			if err := inRange([]string{"width", "height"}[i], v, 4, 100, " cm"); err != nil {
+				return err
+			}
+		}
+	}
+	for _, v := range o.contours {
+		if math.Abs(v) > 1e6 {
+			return usagef("--contours %g: want levels of the measure within ±1e6", v)
+		}
+	}
+	if err := refuseInputs([]string{o.out}, o.site); err != nil {
+		return err
 	}
 	s, err := loadSite(o.example, o.site)
 	if err != nil {
 		return err
 	}
+	if !o.example {
+		if err := refuseInputs([]string{o.out}, siteInputs(s)...); err != nil {
+			return err
+		}
+	}
 	a, err := assess.New(s)
 	if err != nil {
 		return err
 	}
+	warnRepeats(cmd.ErrOrStderr(), a.Repeat, a.Repeats, false)
 	if err := checkTraces(a, o.traces); err != nil {
 		return err
 	}

@@ -85,8 +85,13 @@ func reportState(st insitu.State, mu float64) report.State {
 	return out
 }
 
+// maxReportPlanes is the most planes the report lists: the least stable;
+// every plane is in planes.csv, and the report says so.
+const maxReportPlanes = 500
+
 // planeTable is the plane table, least stable first, grouped by set (sets in
-// order of their least stable plane) when the planes carry a set column.
+// order of their least stable plane) when the planes carry a set column; the
+// maxReportPlanes least stable when there are more.
 func (a *screened) planeTable() (*report.Table, bool) {
 	t := &report.Table{Columns: []string{"plane", "dip/dip dir.", "depth m", "σn'", "τ", "Ts", "Td", "FS", "ΔPp to slip", "rake °", "slip trend °", "sense", "state"},
 		Numeric: []bool{false, true, true, true, true, true, true, true, true, true, true, false, false},
@@ -99,7 +104,12 @@ func (a *screened) planeTable() (*report.Table, bool) {
 	}
 	var order []string
 	groups := map[string]*report.Group{}
-	for _, i := range a.Ranked() {
+	ranked := a.Ranked()
+	if len(ranked) > maxReportPlanes {
+		t.Notes = append(t.Notes, fmt.Sprintf("The %d least stable of the %d planes are listed; planes.csv and planes.json hold every plane.", maxReportPlanes, len(ranked)))
+		ranked = ranked[:maxReportPlanes]
+	}
+	for _, i := range ranked {
 		p, res := &a.Planes[i], a.Results[i]
 		sense := res.Sense.String()
 		if sense == "" {

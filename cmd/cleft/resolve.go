@@ -15,6 +15,7 @@ type resolveOptions struct {
 	planes string
 	format string
 	out    string
+	warn   io.Writer // standard error, for warnings
 }
 
 func newResolveCmd() *cobra.Command {
@@ -34,7 +35,7 @@ output unless --out names a file, which is then written whole or not at all.
 ` + caution,
 		Args: oneSite,
 		RunE: func(cmd *cobra.Command, args []string) error {
-			o.site = args[0]
+			o.site, o.warn = args[0], cmd.ErrOrStderr()
 			return runResolve(o, cmd.InOrStdin(), cmd.OutOrStdout())
 		},
 	}
@@ -49,8 +50,15 @@ func runResolve(o resolveOptions, stdin io.Reader, stdout io.Writer) error {
 	if err != nil {
 		return usageError{err}
 	}
+	outs := []string{o.out}
+	if err := refuseInputs(outs, o.site, o.planes); err != nil {
+		return err
+	}
 	s, err := site.Load(o.site)
 	if err != nil {
+		return err
+	}
+	if err := refuseInputs(outs, siteInputs(s)...); err != nil {
 		return err
 	}
 	ps, err := s.OpenPlanes(o.planes, stdin)
@@ -59,15 +67,20 @@ func runResolve(o resolveOptions, stdin io.Reader, stdout io.Writer) error {
 	}
 	defer ps.Close()
 	if o.out != "" {
-		return writeFile(o.out, func(w io.Writer) error {
+		err = writeFile(o.out, func(w io.Writer) error {
 			_, err := streamTable(s, ps, f, w)
 			return err
 		})
+	} else {
+		bw := bufio.NewWriterSize(stdout, 1<<16)
+		_, err = streamTable(s, ps, f, bw)
+		if ferr := bw.Flush(); err == nil {
+			err = ferr
+		}
 	}
-	bw := bufio.NewWriterSize(stdout, 1<<16)
-	_, err = streamTable(s, ps, f, bw)
-	if ferr := bw.Flush(); err == nil {
-		err = ferr
+	if err == nil {
+		first, n, unchecked := ps.Repeats()
+		warnRepeats(o.warn, first, n, unchecked)
 	}
 	return err
 }

@@ -38,7 +38,7 @@ func run(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 	}
 	var ue usageError
 	if errors.As(err, &ue) || !started {
-		fmt.Fprintf(stderr, "cleft: %v\n", err)
+		fmt.Fprintf(stderr, "cleft: %s\n", site.OneLine(err.Error()))
 		name := "cleft"
 		if c, _, ferr := root.Find(args); ferr == nil && c != root {
 			name = c.CommandPath()
@@ -46,7 +46,7 @@ func run(args []string, stdin io.Reader, stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "Run '%s --help' for usage.\n", name)
 		return 2
 	}
-	fmt.Fprintf(stderr, "cleft: %v\n", err)
+	fmt.Fprintf(stderr, "cleft: %s\n", site.OneLine(err.Error()))
 	return 1
 }
 

@@ -3,11 +3,11 @@ package main
 import (
 	"fmt"
 	"io"
+	"math"
 	"path/filepath"
 	"sort"
 	"strings"
 
-	"cleft/planes"
 	"cleft/planes/assess"
 	"cleft/planes/sets"
 	"cleft/planes/site"
@@ -20,7 +20,7 @@ import (
 
 type setsOptions struct {
 	readings   string
-	count      int
+	count      float64
 	seeds      []string
 	maxAngle   float64
 	line       string
@@ -65,11 +65,11 @@ tensor. With --out: sets.csv, readings.csv and a pole-density stereonet
 		},
 	}
 	f := c.Flags()
-	f.IntVar(&o.count, "sets", 0, "number of sets (default: chosen automatically)")
+	floatVar(f, &o.count, "sets", 0, "number of sets, 1 to 12 (default: chosen automatically)")
 	f.StringArrayVar(&o.seeds, "seed", nil, "starting mean of a set, DIP/DIPDIR (repeat for each set)")
-	f.Float64Var(&o.maxAngle, "max-angle", 0, "cut-off cone about each set mean, degrees (readings beyond are unassigned)")
+	floatVar(f, &o.maxAngle, "max-angle", 0, "cut-off cone about each set mean, degrees (readings beyond are unassigned)")
 	f.StringVar(&o.line, "line", "", "sampling line TREND/PLUNGE for Terzaghi weights")
-	f.Float64Var(&o.maxWeight, "max-weight", sets.DefaultMaxWeight, "cap of the Terzaghi weight")
+	floatVar(f, &o.maxWeight, "max-weight", sets.DefaultMaxWeight, "cap of the Terzaghi weight, 1 to 1000")
 	f.StringVar(&o.out, "out", "", "output folder for sets.csv, readings.csv and the density stereonet")
 	f.StringVar(&o.projection, "projection", "equal-area", "equal-area or equal-angle")
 	return c
@@ -77,12 +77,15 @@ tensor. With --out: sets.csv, readings.csv and a pole-density stereonet
 
 func (o setsOptions) config() (sets.Config, error) {
 	c := sets.DefaultConfig
-	if o.count < 0 || o.count > 12 {
-		return c, usagef("--sets %d: want 1 to 12", o.count)
+	if !(o.count >= 0 && o.count <= 12) || o.count != math.Trunc(o.count) {
+		return c, usagef("--sets %g: want a whole number of sets, 1 to 12", o.count)
 	}
-	c.Count = o.count
+	c.Count = int(o.count)
+	if len(o.seeds) > 12 {
+		return c, usagef("--seed given %d times: at most 12 sets", len(o.seeds))
+	}
 	for _, s := range o.seeds {
-		p, err := planes.Parse(s)
+		p, err := site.ParseOrientation(s)
 		if err != nil {
 			return c, usagef("--seed %v", err)
 		}
@@ -102,8 +105,8 @@ func (o setsOptions) config() (sets.Config, error) {
 		}
 		c.Line = &l
 	}
-	if !(o.maxWeight >= 1) {
-		return c, usagef("--max-weight %v: want a number ≥ 1", o.maxWeight)
+	if err := inRange("max-weight", o.maxWeight, 1, 1000, ""); err != nil {
+		return c, err
 	}
 	c.MaxWeight = o.maxWeight
 	return c, nil
@@ -148,7 +151,8 @@ func printSets(b *strings.Builder, g *sets.Grouping) {
 	for k, s := range an.Sets {
 		m := s.Raw.MeanPlane()
 		p := m.Pole()
-		fmt.Fprintf(b, "%-11s %6d %9.1f %11s %03.0f/%02.0f %8.1f %7.1f %9.2f\n", sets.Name(k), len(s.Members), s.WeightedCount, m, p.Trend, p.Plunge, s.Raw.K, s.Raw.Alpha, s.RawTensor.WoodcockK())
+		fmt.Fprintf(b, "%-11s %6d %9.1f %11s %03.0f/%02.0f %8s %7s %9s\n", sets.Name(k), len(s.Members), s.WeightedCount, m, p.Trend, p.Plunge,
+			words.Fixed(s.Raw.K, 1), words.Fixed(s.Raw.Alpha, 1), words.Fixed(s.RawTensor.WoodcockK(), 2))
 	}
 	fmt.Fprintf(b, "%-11s %6d %9.1f\n", "unassigned", an.Unassigned, an.UnassignedWeight)
 }
@@ -161,6 +165,11 @@ func runSets(o setsOptions, stdin io.Reader, stdout io.Writer) error {
 	proj, err := plots.ParseProjection(o.projection)
 	if err != nil {
 		return usageError{err}
+	}
+	if o.out != "" {
+		if err := refuseInputs(inDir(o.out, setsFiles()), o.readings); err != nil {
+			return err
+		}
 	}
 	readings, extras, _, err := site.LoadReadings(o.readings, stdin)
 	if err != nil {

@@ -64,7 +64,7 @@ func TestSetsBadInput(t *testing.T) {
 		{write("nocol.csv", "dip,azimuth\n40,10\n"), `nocol.csv:1: the header has no "dip_direction" column`, 1, nil},
 		{write("empty.csv", ""), "empty.csv: empty: want a header row", 1, nil},
 		{write("header.csv", "dip,dip_direction\n"), "header.csv: no readings", 1, nil},
-		{write("weight.csv", "dip,dip_direction,weight\n40,10,0\n"), "weight.csv:2: weight (column 3): 0: a weight must be > 0", 1, nil},
+		{write("weight.csv", "dip,dip_direction,weight\n40,10,0\n"), "weight.csv:2: weight (column 3): 0: a weight must be in (0, 1000]", 1, nil},
 		{write("few.csv", "dip,dip_direction\n40,10\n50,20\n"), "2 readings cannot make 3 sets", 1, []string{"--sets", "3"}},
 		{write("ok.csv", "dip,dip_direction\n40,10\n50,20\n"), "--line", 2, []string{"--line", "north"}},
 		{write("ok2.csv", "dip,dip_direction\n40,10\n50,20\n"), "--seed", 2, []string{"--seed", "95/10"}},

@@ -17,6 +17,7 @@ import (
 type slopeOptions struct {
 	site string
 	out  string
+	warn io.Writer // standard error, for warnings
 }
 
 func newSlopeCmd() *cobra.Command {
@@ -44,7 +45,7 @@ toppling is not tested.
 ` + caution,
 		Args: oneSite,
 		RunE: func(cmd *cobra.Command, args []string) error {
-			o.site = args[0]
+			o.site, o.warn = args[0], cmd.ErrOrStderr()
 			return runSlope(o, cmd.OutOrStdout())
 		},
 	}
@@ -53,10 +54,15 @@ toppling is not tested.
 }
 
 func runSlope(o slopeOptions, stdout io.Writer) error {
-	a, err := assessFor(o.site, func(s *site.Site) bool { return s.Slope != nil }, "no slope: block: give the face, height and the rest (see README, Rock slopes)")
+	var outs []string
+	if o.out != "" {
+		outs = inDir(o.out, slopeFiles())
+	}
+	a, err := assessFor(o.site, outs, func(s *site.Site) bool { return s.Slope != nil }, "no slope: block: give the face, height and the rest (see README, Rock slopes)")
 	if err != nil {
 		return err
 	}
+	warnRepeats(o.warn, a.Repeat, a.Repeats, false)
 	sc, counts := a.Slope(), a.SlopeReadings()
 	var b strings.Builder
 	printSlope(&b, sc, counts)
@@ -98,6 +104,11 @@ func slopeTables(sc *slope.Screening, counts []slope.Count) []namedTable {
 	return t
 }
 
+// maxGreyWedges is the most lines of intersection of wedges that are not
+// feasible that the kinematic net draws (every feasible one is drawn): up to
+// assess.MaxWedgePlanes candidates make 19,900 wedges.
+const maxGreyWedges = 1000
+
 // kinematicNet draws the screening on a kinematic stereonet.
 func kinematicNet(siteName string, sc *slope.Screening) *plots.KinematicNet {
 	sl := sc.Slope
@@ -116,14 +127,24 @@ func kinematicNet(siteName string, sc *slope.Screening) *plots.KinematicNet {
 			topple[c.A] = true
 		}
 	}
+	grey, hidden := 0, 0
 	for _, c := range sc.Cases {
 		switch {
 		case c.Test == slope.PlanarTest:
 			k.Items = append(k.Items, plots.KinItem{Name: sc.Names(c), Line: c.Line, Feasible: c.Feasible, Toppling: topple[c.A], Fails: c.Fails})
 		case c.Test == slope.WedgeTest && c.HasLine:
-			one := c.Feasible && (c.Mode == slope.WedgeOnFirst || c.Mode == slope.WedgeOnSecond)
-			k.Items = append(k.Items, plots.KinItem{Name: sc.Names(c), Line: c.Line, Intersection: true, Feasible: c.Feasible, Fails: c.Fails, OnePlane: one})
+			if !c.Feasible {
+				if grey == maxGreyWedges {
+					hidden++
+					continue
+				}
+				grey++
+			}
+			k.Items = append(k.Items, plots.KinItem{Name: sc.Names(c), Line: c.Line, Intersection: true, Feasible: c.Feasible, Fails: c.Fails, OnePlane: c.Feasible && (c.Mode == slope.WedgeOnFirst || c.Mode == slope.WedgeOnSecond)})
 		}
+	}
+	if hidden > 0 {
+		k.Lines = append(k.Lines, fmt.Sprintf("%d lines of intersection of wedges that cannot slide are not drawn (every case is in slope.csv)", hidden))
 	}
 	return k
 }

@@ -11,8 +11,13 @@ import (
 	"cleft/plots/table"
 )
 
-// batchSize is the number of planes read, resolved and written together.
-const batchSize = 2048
+// batchSize is the number of planes read, resolved and written together;
+// a batch also ends once its names and carried values pass batchBytes, so
+// that long rows (up to site.MaxRow) cannot make the batches in flight large.
+const (
+	batchSize  = 2048
+	batchBytes = 1 << 20
+)
 
 // batch is a run of planes on their way through the pipeline.
 type batch struct {
@@ -30,6 +35,7 @@ type batch struct {
 // flight, so memory stays flat however long the input. On a bad row the rows
 // before it are written and its error returned.
 func streamTable(s *site.Site, ps *site.PlaneStream, f table.Format, w io.Writer) (int, error) {
+	names := table.Carried(table.Columns, ps.ExtraNames)
 	workers := runtime.GOMAXPROCS(0)
 	inflight := 2*workers + 1
 	free := make(chan *batch, inflight)
@@ -54,16 +60,22 @@ func streamTable(s *site.Site, ps *site.PlaneStream, f table.Format, w io.Writer
 			b.n, b.err, b.first, b.out = 0, nil, first, b.out[:0]
 			b.done = make(chan struct{})
 			first = false
-			for b.n < batchSize {
-				if err := ps.Next(&b.planes[b.n]); err != nil {
+			size, end := 0, false
+			for b.n < batchSize && size < batchBytes {
+				p := &b.planes[b.n]
+				if err := ps.Next(p); err != nil {
 					if !errors.Is(err, io.EOF) {
 						b.err = err
 					}
+					end = true
 					break
 				}
 				b.n++
+				size += len(p.Name)
+				for _, e := range p.Extras {
+					size += len(e)
+				}
 			}
-			end := b.n < batchSize
 			order <- b
 			work <- b
 			if end {
@@ -83,7 +95,7 @@ func streamTable(s *site.Site, ps *site.PlaneStream, f table.Format, w io.Writer
 				for i := range b.n {
 					p := &b.planes[i]
 					rv.Resolve(p, &r)
-					b.out = table.AppendRow(b.out, f, p, &r, ps.ExtraNames, b.first && i == 0)
+					b.out = table.AppendRow(b.out, f, p, &r, names, b.first && i == 0)
 				}
 				close(b.done)
 			}
@@ -92,7 +104,7 @@ func streamTable(s *site.Site, ps *site.PlaneStream, f table.Format, w io.Writer
 
 	rows := 0
 	var err error
-	if _, err = w.Write(table.Header(f, ps.ExtraNames)); err == nil {
+	if _, err = w.Write(table.Header(f, names)); err == nil {
 		for b := range order {
 			<-b.done
 			if _, err = w.Write(b.out); err != nil {

@@ -40,7 +40,7 @@ depth.
 			return runStress(o, cmd.OutOrStdout())
 		},
 	}
-	c.Flags().Float64SliceVar(&o.depths, "depth", nil, "depth below ground, m (repeat or comma-separate for several)")
+	floatsVar(c.Flags(), &o.depths, "depth", "depth below ground, m (repeat or comma-separate for several)")
 	c.Flags().StringVar(&o.format, "format", "text", "output format: text or json")
 	return c
 }
@@ -50,8 +50,8 @@ func runStress(o stressOptions, stdout io.Writer) error {
 		return usagef("--format %q: want text or json", o.format)
 	}
 	for _, z := range o.depths {
-		if math.IsNaN(z) || math.IsInf(z, 0) || z < 0 {
-			return usagef("--depth %v: want a depth ≥ 0 m below ground", z)
+		if err := inRange("depth", z, 0, site.MaxDepth, " m below ground"); err != nil {
+			return err
 		}
 	}
 	s, err := site.Load(o.site)

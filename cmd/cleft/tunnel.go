@@ -18,6 +18,7 @@ type tunnelOptions struct {
 	site    string
 	out     string
 	station float64
+	warn    io.Writer // standard error, for warnings
 }
 
 func newTunnelCmd() *cobra.Command {
@@ -50,20 +51,25 @@ stresses (--station; default the station of the largest σmax/UCS).
 ` + caution,
 		Args: oneSite,
 		RunE: func(cmd *cobra.Command, args []string) error {
-			o.site = args[0]
+			o.site, o.warn = args[0], cmd.ErrOrStderr()
 			return runTunnel(o, cmd.OutOrStdout())
 		},
 	}
 	c.Flags().StringVar(&o.out, "out", "", "output folder")
-	c.Flags().Float64Var(&o.station, "station", math.NaN(), "chainage of the station for the cross-section and the perimeter plot, m")
+	floatVar(c.Flags(), &o.station, "station", math.NaN(), "chainage of the station for the cross-section and the perimeter plot, m")
 	return c
 }
 
 func runTunnel(o tunnelOptions, stdout io.Writer) error {
-	a, err := assessFor(o.site, func(s *site.Site) bool { return s.Tunnel != nil }, "no tunnel: block: give the alignment, cover and rock (see README, Tunnels)")
+	var outs []string
+	if o.out != "" {
+		outs = inDir(o.out, tunnelFiles())
+	}
+	a, err := assessFor(o.site, outs, func(s *site.Site) bool { return s.Tunnel != nil }, "no tunnel: block: give the alignment, cover and rock (see README, Tunnels)")
 	if err != nil {
 		return err
 	}
+	warnRepeats(o.warn, a.Repeat, a.Repeats, false)
 	sc, err := a.Tunnel()
 	if err != nil {
 		return err

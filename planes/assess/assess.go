@@ -27,6 +27,11 @@ type Assessment struct {
 	NPlanes int // Planes[:NPlanes] are the site's planes, the rest readings
 	Inputs  []Input
 
+	// Repeat is the first of the site's planes named like an earlier one
+	// (kind site.ErrDuplicate), or nil; Repeats counts such planes.
+	Repeat  *site.Error
+	Repeats int
+
 	// Grouping is the readings grouped into sets (nil without
 	// readings_file); Sets are the set means with their stress.
 	Grouping *sets.Grouping
@@ -42,8 +47,13 @@ type SetMean struct {
 	Result planes.Result
 }
 
+// MaxPlanes is the most planes and readings an assessment holds in memory
+// (cleft resolve streams any number).
+const MaxPlanes = 200000
+
 // New resolves every plane and reading of s. A site whose tables hold no
-// plane at all is an error.
+// plane at all is an error, and so is one with more than MaxPlanes, or with
+// a slope and more than MaxWedgePlanes candidates (Candidates).
 func New(s *site.Site) (*Assessment, error) {
 	s.AllowReadingsOnly()
 	ps, err := s.OpenPlanes("", nil)
@@ -53,6 +63,7 @@ func New(s *site.Site) (*Assessment, error) {
 	defer ps.Close()
 	a := &Assessment{Site: s, Extras: ps.ExtraNames, Inputs: []Input{{Name: s.File, SHA256: s.SHA256}}}
 	rv := s.Resolver()
+	held := 0
 	for {
 		var p site.Plane
 		if err := ps.Next(&p); err != nil {
@@ -61,11 +72,17 @@ func New(s *site.Site) (*Assessment, error) {
 			}
 			return nil, err
 		}
+		held += p.TextSize()
+		if len(a.Planes) == MaxPlanes || held > site.MaxHeldText {
+			name, _ := ps.Table()
+			return nil, &site.Error{File: name, Line: p.Line, Err: site.ErrLimit, Msg: fmt.Sprintf("more than %d planes or %d MiB of names and carried values: an assessment holds no more; cleft resolve streams a table of any length", MaxPlanes, site.MaxHeldText>>20)}
+		}
 		var r planes.Result
 		rv.Resolve(&p, &r)
 		a.Planes = append(a.Planes, p)
 		a.Results = append(a.Results, r)
 	}
+	a.Repeat, a.Repeats, _ = ps.Repeats()
 	if name, sum := ps.Table(); name != "" {
 		a.Inputs = append(a.Inputs, Input{Name: name, SHA256: sum})
 	}
@@ -77,6 +94,12 @@ func New(s *site.Site) (*Assessment, error) {
 	}
 	if len(a.Planes) == 0 {
 		return nil, &site.Error{File: s.File, Err: site.ErrNoPlanes, Msg: "no planes to assess: the tables have a header but no rows"}
+	}
+	if len(a.Planes) > MaxPlanes {
+		return nil, &site.Error{File: s.ReadingsFile, Err: site.ErrLimit, Msg: fmt.Sprintf("%d planes and readings: an assessment holds at most %d", len(a.Planes), MaxPlanes)}
+	}
+	if err := a.checkSlope(); err != nil {
+		return nil, err
 	}
 	return a, nil
 }

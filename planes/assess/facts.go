@@ -62,14 +62,14 @@ func (a *Assessment) Facts() Facts {
 	return f
 }
 
-// Largest returns the index in Limits of the largest effective ratio (the
-// first when none is larger than −Inf), and the depths where the limit is
-// exceeded.
+// Largest returns the index in Limits of the largest effective ratio (+Inf
+// counts as largest; a NaN ratio, of a depth without stress, only when every
+// ratio is NaN: then the first), and the depths where the limit is exceeded.
 func (f Facts) Largest() (int, []float64) {
 	best := 0
 	exceeded := []float64{}
 	for i, c := range f.Limits {
-		if c.Ratio > f.Limits[best].Ratio {
+		if b := f.Limits[best].Ratio; c.Ratio > b || (math.IsNaN(b) && !math.IsNaN(c.Ratio)) {
 			best = i
 		}
 		if c.Exceeds {

@@ -35,6 +35,22 @@ func (a *Assessment) Candidates() []slope.Candidate {
 	return out
 }
 
+// MaxWedgePlanes is the most candidates screened against a slope: every
+// pair of them is tested as a wedge, so n candidates make n(n−1)/2 wedges
+// (200 make 19,900), and the kinematic figure draws each.
+const MaxWedgePlanes = 200
+
+// checkSlope refuses a slope screening of more than MaxWedgePlanes
+// candidates, before any wedge is tested.
+func (a *Assessment) checkSlope() error {
+	n := a.NPlanes + len(a.Sets)
+	if a.Site.Slope == nil || n <= MaxWedgePlanes {
+		return nil
+	}
+	return &site.Error{File: a.Site.File, Key: "slope", Err: site.ErrLimit,
+		Msg: fmt.Sprintf("%d planes and set means would make %d wedge pairs: cleft screens at most %d against a slope (%d pairs); give the slope's own planes in planes_file:, or the field readings in readings_file: so that their set means are screened", n, n*(n-1)/2, MaxWedgePlanes, MaxWedgePlanes*(MaxWedgePlanes-1)/2)}
+}
+
 // Slope screens the site's slope against the candidates. It panics when the
 // site has no slope.
 func (a *Assessment) Slope() *slope.Screening {
@@ -71,7 +87,7 @@ func (a *Assessment) SlopeReadings() []slope.Count {
 // Targets are the planes and sets the tunnel is screened against: those
 // named by tunnel.sets, or every site plane (not the readings) and every
 // set mean ("S1", …). A name that matches nothing is an error naming the
-// names there are.
+// names there are, and so are more than MaxTunnelTargets.
 func (a *Assessment) Targets() ([]tunnel.Target, error) {
 	s := a.Site
 	var all []tunnel.Target
@@ -90,7 +106,13 @@ func (a *Assessment) Targets() ([]tunnel.Target, error) {
 	}
 	want := s.Tunnel.Sets
 	if want == nil {
+		if len(all) > MaxTunnelTargets {
+			return nil, &site.Error{File: s.File, Key: "tunnel", Err: site.ErrLimit, Msg: fmt.Sprintf("%d planes and set means: a tunnel is screened against at most %d; choose them with tunnel.sets", len(all), MaxTunnelTargets)}
+		}
 		return all, nil
+	}
+	if len(want) > MaxTunnelTargets {
+		return nil, &site.Error{File: s.File, Key: "tunnel.sets", Err: site.ErrLimit, Msg: fmt.Sprintf("%d names: a tunnel is screened against at most %d planes and sets", len(want), MaxTunnelTargets)}
 	}
 	var out []tunnel.Target
 	for _, w := range want {
@@ -111,6 +133,11 @@ func (a *Assessment) Targets() ([]tunnel.Target, error) {
 	}
 	return out, nil
 }
+
+// MaxTunnelTargets is the most planes and sets a tunnel is screened
+// against: each is resolved at every wall point of every station, and
+// drawn as a line of the along-alignment chart.
+const MaxTunnelTargets = 100
 
 // Tunnel screens the site's tunnel against the targets. It panics when the
 // site has no tunnel.

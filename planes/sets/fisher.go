@@ -16,9 +16,9 @@ type FisherStats struct {
 	N      float64 // number of readings, or the sum of normalised weights
 	R      float64 // length of the resultant vector
 	Mean   r3.Vec  // unit mean axis (lower hemisphere)
-	K      float64 // concentration estimate (N−1)/(N−R); +Inf when R = N
+	K      float64 // concentration estimate (N−1)/(N−R); +Inf when R = N, NaN for one reading
 	Alpha  float64 // α95, the 95 % confidence cone of the mean, degrees
-	SphVar float64 // spherical variance 1 − R/N
+	SphVar float64 // spherical variance 1 − R/N; NaN for one reading
 }
 
 // MeanPole returns the mean as a lower-hemisphere line.
@@ -36,8 +36,9 @@ func (f FisherStats) MeanPlane() planes.Orientation { return planes.FromNormal(f
 // With weights (nil for none) the weights are scaled to sum to the number of
 // readings, so that N stays the sample size and the weights only shift the
 // mean and the spread (the usual practice with Terzaghi weights, e.g. Priest
-// 1993). α95 is NaN for fewer than two readings, and 180 when the formula's
-// cosine falls below −1 (a spread too wide for a cone).
+// 1993). K, α95 and the spherical variance are NaN for fewer than two
+// readings (one reading has no spread to estimate), and α95 is 180 when the formula's cosine falls below
+// −1 (a spread too wide for a cone).
 func Fisher(normals []r3.Vec, weights []float64) FisherStats {
 	n := len(normals)
 	if n == 0 {
@@ -71,12 +72,14 @@ func Fisher(normals []r3.Vec, weights []float64) FisherStats {
 	if f.Mean.Z < 0 {
 		f.Mean = r3.Scale(-1, f.Mean)
 	}
-	f.K = math.Inf(1)
-	if N > R {
-		f.K = (N - 1) / (N - R)
-	}
-	f.Alpha = math.NaN()
-	if n >= 2 {
+	f.K, f.Alpha = math.NaN(), math.NaN()
+	if n < 2 {
+		f.SphVar = math.NaN()
+	} else {
+		f.K = math.Inf(1)
+		if N > R {
+			f.K = (N - 1) / (N - R)
+		}
 		c := 1 - (N-R)/R*(math.Pow(1/0.05, 1/(N-1))-1)
 		f.Alpha = math.Acos(math.Max(-1, math.Min(1, c))) * 180 / math.Pi
 	}

@@ -21,8 +21,10 @@ type Eigen struct {
 //
 // and its eigenvalues and eigenvectors. It treats n and −n alike, so it needs
 // no flipping to a common hemisphere. weights may be nil (all 1); a reading
-// of weight 0 counts for nothing. It panics if the lengths differ and
-// returns NaN values when the total weight is 0.
+// of weight 0 counts for nothing. Eigenvalues below 1e-12 (round-off of a
+// zero: one reading, or readings all in one plane) are returned as 0. It
+// panics if the lengths differ and returns NaN values when the total
+// weight is 0.
 func OrientationTensor(normals []r3.Vec, weights []float64) Eigen {
 	if weights != nil && len(weights) != len(normals) {
 		panic("planes: OrientationTensor with different numbers of normals and weights")
@@ -56,14 +58,21 @@ func OrientationTensor(normals []r3.Vec, weights []float64) Eigen {
 	}
 	out := Eigen{Axes: a}
 	for i := range 3 {
-		out.Values[i] = math.Max(0, v[i])
+		if out.Values[i] = v[i]; v[i] < eigenZero {
+			out.Values[i] = 0
+		}
 	}
 	return out
 }
 
+// eigenZero is the eigenvalue of a normalised orientation tensor taken for
+// zero: the decomposition's round-off is about 1e-16.
+const eigenZero = 1e-12
+
 // WoodcockK returns Woodcock's (1977) shape parameter K = ln(S1/S2)/ln(S2/S3):
-// K > 1 for clusters, K < 1 for girdles. It is NaN when S2 = S3 (a perfect
-// cluster has 0/0) and 0 for a perfect girdle (S1 = S2, S3 = 0).
+// K > 1 for clusters, K < 1 for girdles. It is NaN when S2 = S3 = 0 (one
+// reading, or readings all parallel: 0/0) and 0 for a perfect girdle
+// (S1 = S2, S3 = 0).
 func (e Eigen) WoodcockK() float64 {
 	s1, s2, s3 := e.Values[0], e.Values[1], e.Values[2]
 	num := math.Log(s1 / s2)

@@ -9,7 +9,9 @@ package site
 import (
 	"errors"
 	"fmt"
+	"strconv"
 	"strings"
+	"unicode/utf8"
 )
 
 // The kinds of input mistakes, wrapped by *Error: compare with errors.Is.
@@ -26,6 +28,8 @@ var (
 	ErrNoPlanes   = errors.New("no planes")
 	ErrRead       = errors.New("cannot read")
 	ErrInvalid    = errors.New("invalid input")
+	ErrLimit      = errors.New("more than cleft accepts")
+	ErrEncoding   = errors.New("not UTF-8 text, or control characters")
 )
 
 // Error is a mistake in an input file. Lines and columns are 1-indexed;
@@ -41,7 +45,8 @@ type Error struct {
 	Msg    string
 }
 
-// Error returns the one-line message: FILE:LINE: KEY: MESSAGE.
+// Error returns the one-line message: FILE:LINE: KEY: MESSAGE, made one
+// line of at most MaxMessage characters by OneLine.
 func (e *Error) Error() string {
 	var b strings.Builder
 	b.WriteString(e.File)
@@ -54,7 +59,7 @@ func (e *Error) Error() string {
 		b.WriteString(": ")
 	}
 	b.WriteString(e.Msg)
-	return b.String()
+	return OneLine(b.String())
 }
 
 // Unwrap returns the kind of mistake.
@@ -70,3 +75,62 @@ func (e *Error) is(kind error) *Error {
 	e.Err = kind
 	return e
 }
+
+// MaxMessage is the most characters of an error message; MaxQuote the most
+// characters of an input value quoted in one.
+const (
+	MaxMessage = 300
+	MaxQuote   = 80
+)
+
+// Quote returns s in double quotes as Go writes strings (control characters
+// and invalid UTF-8 escaped), cut to its first MaxQuote characters and "…"
+// when longer, so that a message quoting a value stays one short line.
+func Quote(s string) string {
+	if utf8.RuneCountInString(s) <= MaxQuote {
+		return strconv.Quote(s)
+	}
+	n := 0
+	for i := range s {
+		if n == MaxQuote {
+			return strconv.Quote(s[:i]) + "…"
+		}
+		n++
+	}
+	return strconv.Quote(s)
+}
+
+// OneLine returns s as one line of at most MaxMessage characters: control
+// characters become escapes (a newline is written \n), invalid UTF-8
+// becomes U+FFFD, and a longer text is cut, ending in "…".
+func OneLine(s string) string {
+	var b strings.Builder
+	for i := 0; i < len(s); i++ {
+		if c := s[i]; c < 0x20 || c >= 0x7f {
+			for _, r := range s {
+				if isControl(r) {
+					q := strconv.QuoteRune(r)
+					b.WriteString(q[1 : len(q)-1])
+				} else {
+					b.WriteRune(r) // U+FFFD for an invalid byte
+				}
+			}
+			s = b.String()
+			break
+		}
+	}
+	if utf8.RuneCountInString(s) <= MaxMessage {
+		return s
+	}
+	n := 0
+	for i := range s {
+		if n == MaxMessage-1 {
+			return s[:i] + "…"
+		}
+		n++
+	}
+	return s
+}
+
+// isControl reports whether r is a C0 or C1 control character or DEL.
+func isControl(r rune) bool { return r < 0x20 || (r >= 0x7f && r < 0xa0) }

@@ -75,9 +75,9 @@ func (d node) mapping(allowed ...string) (*fields, error) {
 		}
 		kd := d.child(k, v)
 		if !ok {
-			msg := fmt.Sprintf("unknown key %q; allowed here: %s", name, strings.Join(allowed, ", "))
+			msg := fmt.Sprintf("unknown key %s; allowed here: %s", Quote(name), strings.Join(allowed, ", "))
 			if s := suggest(name, allowed); s != "" {
-				msg = fmt.Sprintf("unknown key %q (did you mean %q?); allowed here: %s", name, s, strings.Join(allowed, ", "))
+				msg = fmt.Sprintf("unknown key %s (did you mean %q?); allowed here: %s", Quote(name), s, strings.Join(allowed, ", "))
 			}
 			return nil, kd.errf("%s", msg).is(ErrUnknownKey)
 		}
@@ -103,7 +103,7 @@ func kindName(n *yaml.Node) string {
 		if n.Tag == "!!null" {
 			return "an empty value"
 		}
-		return fmt.Sprintf("%q", n.Value)
+		return Quote(n.Value)
 	}
 	return "something else"
 }
@@ -126,9 +126,12 @@ func suggest(name string, allowed []string) string {
 	return best
 }
 
+// editDistance is the optimal-string-alignment distance between a and b:
+// insertions, deletions, substitutions and swaps of neighbouring letters
+// count one each ("depht" is one from "depth").
 func editDistance(a, b string) int {
-	prev := make([]int, len(b)+1)
-	cur := make([]int, len(b)+1)
+	rows := [3][]int{make([]int, len(b)+1), make([]int, len(b)+1), make([]int, len(b)+1)}
+	pp, prev, cur := rows[0], rows[1], rows[2]
 	for j := range prev {
 		prev[j] = j
 	}
@@ -140,8 +143,11 @@ func editDistance(a, b string) int {
 				c = 0
 			}
 			cur[j] = min(prev[j]+1, cur[j-1]+1, prev[j-1]+c)
+			if i > 1 && j > 1 && a[i-1] == b[j-2] && a[i-2] == b[j-1] {
+				cur[j] = min(cur[j], pp[j-2]+1)
+			}
 		}
-		prev, cur = cur, prev
+		pp, prev, cur = prev, cur, pp
 	}
 	return prev[len(b)]
 }
@@ -166,14 +172,14 @@ func (f *fields) missing(key, why string) *Error {
 	return f.parent.errf("missing required key %q%s", key, why).is(ErrMissing)
 }
 
-// number reads a finite number.
+// number reads a decimal number (ParseNumber).
 func (d node) number() (float64, error) {
 	if d.n == nil || d.n.Kind != yaml.ScalarNode || d.n.Tag == "!!null" {
 		return 0, d.errf("want a number, got %s", kindName(d.n)).is(ErrNotNumber)
 	}
-	v, err := strconv.ParseFloat(strings.TrimSpace(d.n.Value), 64)
-	if err != nil || math.IsNaN(v) || math.IsInf(v, 0) {
-		return 0, d.errf("want a finite number, got %q", d.n.Value).is(ErrNotNumber)
+	v, ok := ParseNumber(d.n.Value)
+	if !ok {
+		return 0, d.errf("want a decimal number such as 12.5 or 1.2e3, got %s", Quote(d.n.Value)).is(ErrNotNumber)
 	}
 	return v, nil
 }
@@ -214,6 +220,8 @@ func (iv interval) contains(v float64) bool {
 var (
 	positive    = interval{lo: 0, hi: math.Inf(1), openLo: true, openHi: true}
 	nonNegative = interval{lo: 0, hi: math.Inf(1), openHi: true}
+	depthRange  = interval{lo: 0, hi: MaxDepth, unit: "m"}
+	stressRange = interval{lo: 0, hi: MaxStress, unit: "MPa"}
 )
 
 func unit(iv interval, u string) interval { iv.unit = u; return iv }
@@ -225,14 +233,24 @@ func (d node) numberIn(iv interval) (float64, error) {
 		return 0, err
 	}
 	if !iv.contains(v) {
-		return 0, d.errf("%s is outside the allowed range %s", d.n.Value, iv).is(ErrRange)
+		return 0, d.errf("%s is outside the allowed range %s", strings.TrimSpace(d.n.Value), iv).is(ErrRange)
 	}
 	return v, nil
 }
 
-func (d node) text() (string, error) {
+// text reads a one-line text value: no control characters, tabs or line
+// breaks (a name, a path, a choice).
+func (d node) text() (string, error) { return d.textOf(false) }
+
+// freeText reads a text value that may hold tabs and line breaks (source:).
+func (d node) freeText() (string, error) { return d.textOf(true) }
+
+func (d node) textOf(breaks bool) (string, error) {
 	if d.n == nil || d.n.Kind != yaml.ScalarNode || d.n.Tag == "!!null" {
 		return "", d.errf("want text, got %s", kindName(d.n)).is(ErrType)
+	}
+	if i := badText(d.n.Value, breaks); i >= 0 {
+		return "", d.errf("%s: %s", Quote(d.n.Value), textProblem(d.n.Value, i)).is(ErrEncoding)
 	}
 	return d.n.Value, nil
 }
@@ -254,7 +272,7 @@ func (d node) oneOf(choices ...string) (string, error) {
 			return s, nil
 		}
 	}
-	return "", d.errf("%q is not one of: %s", s, strings.Join(choices, ", ")).is(ErrRange)
+	return "", d.errf("%s is not one of: %s", Quote(s), strings.Join(choices, ", ")).is(ErrRange)
 }
 
 func (d node) list() ([]node, error) {
@@ -284,4 +302,13 @@ func (f *fields) optText(key string) (string, error) {
 		return "", nil
 	}
 	return v.text()
+}
+
+// source reads the optional free-text source: key.
+func (f *fields) source() (string, error) {
+	v, ok := f.get("source")
+	if !ok {
+		return "", nil
+	}
+	return v.freeText()
 }

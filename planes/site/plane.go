@@ -2,7 +2,6 @@ package site
 
 import (
 	"math"
-	"strconv"
 	"strings"
 
 	"cleft/planes"
@@ -21,6 +20,16 @@ type Plane struct {
 	Weight       float64 // readings only: the reading's own weight, > 0
 	// Extras are the values of the input's extra columns, in ExtraNames order.
 	Extras []string
+}
+
+// TextSize is the number of bytes of the plane's name and carried values,
+// for a caller that holds many planes to bound (see MaxHeldText).
+func (p *Plane) TextSize() int {
+	n := len(p.Name)
+	for _, e := range p.Extras {
+		n += len(e)
+	}
+	return n
 }
 
 // The columns a plane may give, in both the CSV table and inline YAML.
@@ -57,27 +66,33 @@ func (s *Site) planeDefaults() planeDefaults {
 
 // parsePlane builds a plane from the raw text of its columns; present says
 // which columns the input has. errAt reports a problem with one column.
+// Messages quote values as given.
 func parsePlane(vals *[nCols]string, present *[nCols]bool, d planeDefaults, errAt func(col int, kind error, format string, a ...any) error) (Plane, error) {
 	var p Plane
 	p.Name = strings.TrimSpace(vals[colName])
 	if p.Name == "" && !d.readings {
 		return p, errAt(colName, ErrMissing, "empty name: every plane needs one")
 	}
-	num := func(col int) (float64, bool, error) {
+	// num reads column col: its value, its text as given, and whether it
+	// was given at all (an empty cell is not).
+	num := func(col int) (float64, string, bool, error) {
 		if !present[col] {
-			return math.NaN(), false, nil
+			return math.NaN(), "", false, nil
 		}
 		t := strings.TrimSpace(vals[col])
 		if t == "" {
-			return math.NaN(), false, nil
+			return math.NaN(), "", false, nil
 		}
-		v, err := strconv.ParseFloat(t, 64)
-		if err != nil || math.IsNaN(v) || math.IsInf(v, 0) {
-			return 0, false, errAt(col, ErrNotNumber, "%q is not a number", t)
+		v, ok := ParseNumber(t)
+		if !ok {
+			if (col == colDip || col == colDipDirection || col == colStrike) && strings.Contains(t, "/") {
+				return 0, t, false, errAt(col, ErrNotNumber, "%s looks like DIP/DIP_DIRECTION in one cell: give the dip and the dip direction in columns of their own", Quote(t))
+			}
+			return 0, t, false, errAt(col, ErrNotNumber, "%s is not a decimal number", Quote(t))
 		}
-		return v, true, nil
+		return v, t, true, nil
 	}
-	dip, ok, err := num(colDip)
+	dip, t, ok, err := num(colDip)
 	if err != nil {
 		return p, err
 	}
@@ -85,10 +100,10 @@ func parsePlane(vals *[nCols]string, present *[nCols]bool, d planeDefaults, errA
 		return p, errAt(colDip, ErrMissing, "empty: every plane needs a dip in [0, 90]°")
 	}
 	if dip < 0 || dip > 90 {
-		return p, errAt(colDip, ErrRange, "%s is outside [0, 90]° (dip is measured down from the horizontal)", fmtNum(dip))
+		return p, errAt(colDip, ErrRange, "%s is outside [0, 90]° (dip is measured down from the horizontal)", t)
 	}
 	if present[colStrike] {
-		st, ok, err := num(colStrike)
+		st, t, ok, err := num(colStrike)
 		if err != nil {
 			return p, err
 		}
@@ -96,10 +111,10 @@ func parsePlane(vals *[nCols]string, present *[nCols]bool, d planeDefaults, errA
 			return p, errAt(colStrike, ErrMissing, "empty: every plane needs a strike in [0, 360]°")
 		}
 		if p.Orientation, err = planes.FromStrike(st, dip); err != nil {
-			return p, errAt(colStrike, ErrRange, "%s is outside [0, 360]°", fmtNum(st))
+			return p, errAt(colStrike, ErrRange, "%s is outside [0, 360]°", t)
 		}
 	} else {
-		dd, ok, err := num(colDipDirection)
+		dd, t, ok, err := num(colDipDirection)
 		if err != nil {
 			return p, err
 		}
@@ -107,16 +122,18 @@ func parsePlane(vals *[nCols]string, present *[nCols]bool, d planeDefaults, errA
 			return p, errAt(colDipDirection, ErrMissing, "empty: every plane needs a dip direction in [0, 360]°")
 		}
 		if p.Orientation, err = planes.New(dip, dd); err != nil {
-			return p, errAt(colDipDirection, ErrRange, "%s is outside [0, 360]°", fmtNum(dd))
+			return p, errAt(colDipDirection, ErrRange, "%s is outside [0, 360]°", t)
 		}
 	}
-	z, ok, err := num(colDepth)
+	z, t, ok, err := num(colDepth)
 	if err != nil {
 		return p, err
 	}
 	switch {
 	case ok && z < 0:
-		return p, errAt(colDepth, ErrRange, "%s is negative: depth is metres below ground, ≥ 0", fmtNum(z))
+		return p, errAt(colDepth, ErrRange, "%s is negative: depth is metres below ground, ≥ 0", t)
+	case ok && z > MaxDepth:
+		return p, errAt(colDepth, ErrRange, "%s m is deeper than the %g m cleft accepts", t, MaxDepth)
 	case ok:
 		p.Depth = z
 	case d.hasDepth:
@@ -126,27 +143,27 @@ func parsePlane(vals *[nCols]string, present *[nCols]bool, d planeDefaults, errA
 	default:
 		return p, errAt(colDepth, ErrMissing, "no depth for this plane and no depth: in the site file")
 	}
-	if p.Weight, ok, err = num(colWeight); err != nil {
+	if p.Weight, t, ok, err = num(colWeight); err != nil {
 		return p, err
-	} else if ok && !(p.Weight > 0) {
-		return p, errAt(colWeight, ErrRange, "%s: a weight must be > 0", fmtNum(p.Weight))
+	} else if ok && !(p.Weight > 0 && p.Weight <= MaxWeight) {
+		return p, errAt(colWeight, ErrRange, "%s: a weight must be in (0, %g]", t, MaxWeight)
 	}
-	if p.Friction, ok, err = num(colFriction); err != nil {
+	if p.Friction, t, ok, err = num(colFriction); err != nil {
 		return p, err
-	} else if ok && !(p.Friction > 0) {
-		return p, errAt(colFriction, ErrRange, "%s: friction must be > 0", fmtNum(p.Friction))
+	} else if ok && !(p.Friction > 0 && p.Friction <= MaxFriction) {
+		return p, errAt(colFriction, ErrRange, "%s: friction μ must be in (0, %g]", t, MaxFriction)
 	}
-	if p.Cohesion, ok, err = num(colCohesion); err != nil {
+	if p.Cohesion, t, ok, err = num(colCohesion); err != nil {
 		return p, err
-	} else if ok && p.Cohesion < 0 {
-		return p, errAt(colCohesion, ErrRange, "%s MPa: cohesion must be ≥ 0", fmtNum(p.Cohesion))
+	} else if ok && !(p.Cohesion >= 0 && p.Cohesion <= MaxStress) {
+		return p, errAt(colCohesion, ErrRange, "%s MPa: cohesion must be in [0, %g] MPa", t, MaxStress)
 	} else if ok && !d.coulomb && math.IsNaN(p.Friction) {
 		return p, errAt(colCohesion, ErrConflict, "a cohesion alone cannot override the Barton–Bandis criterion: give friction too")
 	}
-	if p.PorePressure, ok, err = num(colPorePressure); err != nil {
+	if p.PorePressure, t, ok, err = num(colPorePressure); err != nil {
 		return p, err
-	} else if ok && p.PorePressure < 0 {
-		return p, errAt(colPorePressure, ErrRange, "%s MPa: pore pressure must be ≥ 0", fmtNum(p.PorePressure))
+	} else if ok && !(p.PorePressure >= 0 && p.PorePressure <= MaxStress) {
+		return p, errAt(colPorePressure, ErrRange, "%s MPa: pore pressure must be in [0, %g] MPa", t, MaxStress)
 	}
 	return p, nil
 }

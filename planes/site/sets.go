@@ -7,27 +7,9 @@ import (
 	"math"
 	"os"
 	"path/filepath"
-	"strconv"
-	"strings"
 
-	"cleft/insitu/geom"
-	"cleft/planes"
 	"cleft/planes/sets"
 )
-
-// ParseLine reads "TREND/PLUNGE", e.g. "120/10".
-func ParseLine(s string) (geom.Line, error) {
-	a, b, ok := strings.Cut(s, "/")
-	t, err1 := strconv.ParseFloat(strings.TrimSpace(a), 64)
-	p, err2 := strconv.ParseFloat(strings.TrimSpace(b), 64)
-	switch {
-	case !ok || err1 != nil || err2 != nil:
-		return geom.Line{}, fmt.Errorf("%q: want TREND/PLUNGE in degrees, e.g. 120/10", s)
-	case !(t >= 0 && t <= 360) || !(p >= 0 && p <= 90):
-		return geom.Line{}, fmt.Errorf("%q: trend must be in [0, 360] and plunge in [0, 90]", s)
-	}
-	return geom.Line{Trend: geom.Azimuth(t), Plunge: p}, nil
-}
 
 func (s *Site) readSets(v node) error {
 	m, err := v.mapping("count", "seeds", "max_angle", "line", "max_weight")
@@ -50,12 +32,15 @@ func (s *Site) readSets(v node) error {
 		if err != nil {
 			return err
 		}
+		if len(items) > 12 {
+			return sv.errf("%d seeds: at most 12 sets", len(items)).is(ErrLimit)
+		}
 		for _, it := range items {
 			t, err := it.text()
 			if err != nil {
 				return err
 			}
-			o, err := planes.Parse(t)
+			o, err := ParseOrientation(t)
 			if err != nil {
 				return it.errf("%v", err)
 			}
@@ -97,6 +82,7 @@ func ReadReadings(r io.Reader, name string, depth float64, hasDepth bool) ([]Pla
 		return nil, nil, "", err
 	}
 	var out []Plane
+	held := 0
 	for {
 		var p Plane
 		if err := rd.Next(&p); err != nil {
@@ -104,6 +90,12 @@ func ReadReadings(r io.Reader, name string, depth float64, hasDepth bool) ([]Pla
 				break
 			}
 			return nil, nil, "", err
+		}
+		if held += p.TextSize(); held > MaxHeldText {
+			return nil, nil, "", &Error{File: name, Line: p.Line, Err: ErrLimit, Msg: fmt.Sprintf("the readings hold more than %d MiB of names and other values: split the table", MaxHeldText>>20)}
+		}
+		if len(out) == MaxReadings {
+			return nil, nil, "", &Error{File: name, Line: p.Line, Err: ErrLimit, Msg: fmt.Sprintf("more than %d readings: cleft groups at most %d into sets; split the table (by borehole or domain)", MaxReadings, MaxReadings)}
 		}
 		out = append(out, p)
 	}

@@ -44,6 +44,9 @@ type Site struct {
 	// ReadingsFile is the readings_file path (field readings to group into
 	// sets) resolved likewise, or "".
 	ReadingsFile string
+	// CoverFile is the tunnel's cover_file path resolved likewise (already
+	// read), or "".
+	CoverFile string
 	// Sets is how the readings are grouped (the sets: block, or defaults).
 	Sets sets.Config
 	// Slope is the cut slope to screen, or nil; SlopeDefaults lists the
@@ -87,9 +90,15 @@ type Param struct {
 // "SHmax 1.3·Sv @ 065°, Shmin 0.8·Sv, Sv 0.0265 MPa/m, Pp hydrostatic below 12 m, μ = 0.6".
 func (s *Site) Summary() string { return strings.Join(s.summary, ", ") }
 
-// Load reads and validates the site file at path.
+// Load reads and validates the site file at path. A file of more than
+// MaxSiteBytes is an error (ErrLimit) read no further.
 func Load(path string) (*Site, error) {
-	data, err := os.ReadFile(path)
+	f, err := os.Open(path)
+	if err != nil {
+		return nil, &Error{File: path, Err: ErrRead, Msg: fmt.Sprintf("cannot read the site file: %v", unwrapPath(err))}
+	}
+	defer f.Close()
+	data, err := io.ReadAll(io.LimitReader(f, MaxSiteBytes+1))
 	if err != nil {
 		return nil, &Error{File: path, Err: ErrRead, Msg: fmt.Sprintf("cannot read the site file: %v", unwrapPath(err))}
 	}
@@ -105,10 +114,18 @@ func unwrapPath(err error) error {
 }
 
 // Parse reads a site file from data; name is used in errors and to resolve
-// planes_file.
+// planes_file. The file must be UTF-8 text of at most MaxSiteBytes.
 func Parse(data []byte, name string) (*Site, error) { return parse(data, name, nil) }
 
 func parse(data []byte, name string, fsys fs.FS) (*Site, error) {
+	if len(data) > MaxSiteBytes {
+		return nil, &Error{File: name, Err: ErrLimit, Msg: fmt.Sprintf("the site file is over %d MiB: put long lists of planes in planes_file: (a CSV table)", MaxSiteBytes>>20)}
+	}
+	if i := badText(string(data), true); i >= 0 {
+		start := bytes.LastIndexByte(data[:i], '\n') + 1
+		line := bytes.Count(data[:i], []byte("\n")) + 1
+		return nil, &Error{File: name, Line: line, Err: ErrEncoding, Msg: textProblem(string(data[start:]), i-start)}
+	}
 	dec := yaml.NewDecoder(bytes.NewReader(data))
 	var doc yaml.Node
 	if err := dec.Decode(&doc); err != nil {
@@ -196,7 +213,7 @@ func (s *Site) read(root node) error {
 	if strings.TrimSpace(s.Name) == "" {
 		return v.errf("the site name is empty").is(ErrEmpty)
 	}
-	if s.Depth, s.HasDepth, err = f.optNumber("depth", unit(nonNegative, "m"), 0); err != nil {
+	if s.Depth, s.HasDepth, err = f.optNumber("depth", depthRange, 0); err != nil {
 		return err
 	}
 	// Water and strength first: the stress model needs the water model, and
@@ -289,7 +306,7 @@ func (s *Site) readWater(f *fields) error {
 	if err != nil {
 		return err
 	}
-	src, err := m.optText("source")
+	src, err := m.source()
 	if err != nil {
 		return err
 	}
@@ -305,11 +322,11 @@ func (s *Site) readWater(f *fields) error {
 		s.Params = append(s.Params, Param{Group: "water", Name: "dry", Value: "true", Source: src})
 	} else {
 		var given bool
-		if w.Gradient, given, err = m.optNumber("gradient", unit(positive, "MPa/m"), insitu.Hydrostatic); err != nil {
+		if w.Gradient, given, err = m.optNumber("gradient", interval{lo: 0, hi: MaxGradient, openLo: true, unit: "MPa/m"}, insitu.Hydrostatic); err != nil {
 			return err
 		}
 		s.param("water", "gradient", w.Gradient, "MPa/m", src, !given)
-		if w.Table, given, err = m.optNumber("table", unit(nonNegative, "m"), 0); err != nil {
+		if w.Table, given, err = m.optNumber("table", depthRange, 0); err != nil {
 			return err
 		}
 		s.param("water", "table", w.Table, "m", src, !given)
@@ -339,83 +356,6 @@ func describeWater(w insitu.Water) string {
 	return d
 }
 
-func (s *Site) readStrength(f *fields) error {
-	v, ok := f.get("strength")
-	if !ok {
-		c, _ := planes.NewCoulomb(0.6, 0)
-		s.Criterion = c
-		s.param("strength", "friction", 0.6, "", "", true)
-		s.param("strength", "cohesion", 0, "MPa", "", true)
-		s.summary = append(s.summary, "μ = 0.6 (default)")
-		return nil
-	}
-	m, err := v.mapping("model", "friction", "cohesion", "jrc", "jcs", "residual_angle", "source")
-	if err != nil {
-		return err
-	}
-	src, err := m.optText("source")
-	if err != nil {
-		return err
-	}
-	model := "coulomb"
-	if mv, ok := m.get("model"); ok {
-		if model, err = mv.oneOf("coulomb", "barton-bandis"); err != nil {
-			return err
-		}
-	}
-	if model == "coulomb" {
-		if k := m.present("jrc", "jcs", "residual_angle"); len(k) > 0 {
-			return m.vals[k[0]].errf("goes with model: barton-bandis, not with the Coulomb criterion").is(ErrConflict)
-		}
-		mu, given, err := m.optNumber("friction", positive, 0.6)
-		if err != nil {
-			return err
-		}
-		s.param("strength", "friction", mu, "", src, !given)
-		c, cgiven, err := m.optNumber("cohesion", unit(nonNegative, "MPa"), 0)
-		if err != nil {
-			return err
-		}
-		s.param("strength", "cohesion", c, "MPa", src, !cgiven)
-		s.Criterion = &planes.Coulomb{Mu: mu, Cohesion: c}
-		d := "μ = " + fmtNum(mu)
-		if c != 0 {
-			d += ", c = " + fmtNum(c) + " MPa"
-		}
-		s.summary = append(s.summary, d)
-		return nil
-	}
-	if k := m.present("friction", "cohesion"); len(k) > 0 {
-		return m.vals[k[0]].errf("goes with the Coulomb criterion, not with model: barton-bandis").is(ErrConflict)
-	}
-	var vals [3]float64
-	for i, k := range []struct {
-		key  string
-		iv   interval
-		unit string
-	}{
-		{"jrc", interval{lo: 0, hi: 20}, ""},
-		{"jcs", unit(positive, "MPa"), "MPa"},
-		{"residual_angle", interval{lo: 0, hi: planes.MaxBartonAngle, openLo: true, openHi: true, unit: "°"}, "°"},
-	} {
-		kv, ok := m.get(k.key)
-		if !ok {
-			return m.missing(k.key, " (barton-bandis needs jrc, jcs and residual_angle)")
-		}
-		if vals[i], err = kv.numberIn(k.iv); err != nil {
-			return err
-		}
-		s.param("strength", k.key, vals[i], k.unit, src, false)
-	}
-	b, err := planes.NewBartonBandis(vals[0], vals[1], vals[2])
-	if err != nil {
-		return v.errf("%v", err)
-	}
-	s.Criterion = b
-	s.summary = append(s.summary, fmt.Sprintf("Barton–Bandis JRC %s, JCS %s MPa, φr %s°", fmtNum(vals[0]), fmtNum(vals[1]), fmtNum(vals[2])))
-	return nil
-}
-
 func (s *Site) readReport(v node) error {
 	m, err := v.mapping("depths")
 	if err != nil {
@@ -432,8 +372,11 @@ func (s *Site) readReport(v node) error {
 	if len(items) == 0 {
 		return dv.errf("the list is empty: give at least one depth, or leave report: out").is(ErrEmpty)
 	}
+	if len(items) > MaxReportDepths {
+		return dv.errf("%d depths: at most %d", len(items), MaxReportDepths).is(ErrLimit)
+	}
 	for _, it := range items {
-		z, err := it.numberIn(unit(nonNegative, "m"))
+		z, err := it.numberIn(depthRange)
 		if err != nil {
 			return err
 		}

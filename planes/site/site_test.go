@@ -147,7 +147,7 @@ func TestCoverFile(t *testing.T) {
 	if c, ok := s.Tunnel.CoverAt(25); !ok || c != 15 {
 		t.Errorf("cover at 25 m = %v, %v; want 15", c, ok)
 	}
-	if _, err := ParseFS(fsys, "bad.yaml"); err == nil || !strings.Contains(err.Error(), "badcover.csv:3: cover: \"-3\": want a number ≥ 0") {
+	if _, err := ParseFS(fsys, "bad.yaml"); err == nil || !strings.Contains(err.Error(), "badcover.csv:3: cover: \"-3\": want a decimal number in [0, 20000] m") {
 		t.Errorf("bad cover file: %v", err)
 	}
 }

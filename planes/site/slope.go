@@ -60,7 +60,7 @@ func (s *Site) readSlope(v node) error {
 	if !ok {
 		return m.missing("height", " (m, toe to crest)")
 	}
-	if sl.Height, err = hv.numberIn(unit(positive, "m")); err != nil {
+	if sl.Height, err = hv.numberIn(interval{lo: 0, hi: MaxDepth, openLo: true, unit: "m"}); err != nil {
 		return err
 	}
 	phiDefault := math.Atan(s.Criterion.Friction()) * 180 / math.Pi
@@ -113,10 +113,10 @@ func (s *Site) readSlope(v node) error {
 		sl.CrackGiven = true
 		if dv, ok := cm.get("depth"); ok {
 			sl.CrackByDepth = true
-			if sl.Crack, err = dv.numberIn(unit(nonNegative, "m")); err != nil {
+			if sl.Crack, err = dv.numberIn(depthRange); err != nil {
 				return err
 			}
-		} else if sl.Crack, err = cm.vals["distance"].numberIn(unit(nonNegative, "m")); err != nil {
+		} else if sl.Crack, err = cm.vals["distance"].numberIn(interval{lo: 0, hi: MaxLength, unit: "m"}); err != nil {
 			return err
 		}
 	} else {

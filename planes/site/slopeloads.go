@@ -32,6 +32,9 @@ func (s *Site) readSlopeWater(m *fields, sl *slope.Slope, defaults []string) ([]
 	if len(items) == 0 {
 		return defaults, wv.errf("give at least one water case: m of water, table or full").is(ErrEmpty)
 	}
+	if len(items) > MaxWaterCases {
+		return defaults, wv.errf("%d water cases: at most %d", len(items), MaxWaterCases).is(ErrLimit)
+	}
 	for _, it := range items {
 		if it.n != nil && it.n.Tag == "!!str" {
 			w, err := it.oneOf("table", "full")

@@ -8,6 +8,9 @@ import (
 	"cleft/insitu/geom"
 )
 
+// ratioRange is the range of a horizontal stress ratio.
+var ratioRange = interval{lo: 0, hi: MaxRatio, openLo: true}
+
 var stressKeys = []string{"vertical", "shmax", "shmin", "principal", "tensor", "reference_depth", "scaling", "source"}
 
 func (s *Site) readStress(v node) error {
@@ -28,7 +31,7 @@ func (s *Site) readStress(v node) error {
 	if forms != 1 {
 		return v.errf("give exactly one stress model: vertical + shmax + shmin (gradients and ratios), principal: (three measured principal stresses) or tensor: (six components)")
 	}
-	src, err := m.optText("source")
+	src, err := m.source()
 	if err != nil {
 		return err
 	}
@@ -50,7 +53,7 @@ func (s *Site) readGradient(m *fields, src string) error {
 	if err != nil {
 		return err
 	}
-	vsrc, err := vm.optText("source")
+	vsrc, err := vm.source()
 	if err != nil {
 		return err
 	}
@@ -66,7 +69,7 @@ func (s *Site) readGradient(m *fields, src string) error {
 		return vm.vals["density"].errf("give gradient or density, not both").is(ErrConflict)
 	}
 	if g, ok := vm.get("gradient"); ok {
-		if gv, err = g.numberIn(unit(positive, "MPa/m")); err != nil {
+		if gv, err = g.numberIn(interval{lo: 0, hi: MaxGradient, openLo: true, unit: "MPa/m"}); err != nil {
 			return err
 		}
 		s.param("stress", "Sv gradient", gv, "MPa/m", vsrc, false)
@@ -140,7 +143,7 @@ func (s *Site) readHorizontal(v node, name, src string, isMax bool) (insitu.Hori
 	if err != nil {
 		return insitu.Horizontal{}, 0, err
 	}
-	if hs, err := m.optText("source"); err != nil {
+	if hs, err := m.source(); err != nil {
 		return insitu.Horizontal{}, 0, err
 	} else if hs != "" {
 		src = hs
@@ -159,15 +162,15 @@ func (s *Site) readHorizontal(v node, name, src string, isMax bool) (insitu.Hori
 	switch law {
 	case "ratio":
 		h.Kind = insitu.Ratio
-		h.Value, err = lv.numberIn(positive)
+		h.Value, err = lv.numberIn(ratioRange)
 		s.param("stress", name+" ratio S/Sv", h.Value, "", src, false)
 	case "effective_ratio":
 		h.Kind = insitu.EffectiveRatio
-		h.Value, err = lv.numberIn(positive)
+		h.Value, err = lv.numberIn(ratioRange)
 		s.param("stress", name+" effective ratio (S−αPp)/(Sv−αPp)", h.Value, "", src, false)
 	case "gradient":
 		h.Kind = insitu.Gradient
-		h.Value, err = lv.numberIn(unit(positive, "MPa/m"))
+		h.Value, err = lv.numberIn(interval{lo: 0, hi: MaxHorizontalGradient, openLo: true, unit: "MPa/m"})
 		s.param("stress", name+" gradient", h.Value, "MPa/m", src, false)
 	case "sheorey":
 		h.Kind = insitu.Sheorey
@@ -179,7 +182,7 @@ func (s *Site) readHorizontal(v node, name, src string, isMax bool) (insitu.Hori
 		if !ok {
 			return h, 0, sm.missing("modulus", " (Eh, the horizontal deformation modulus, GPa)")
 		}
-		h.Value, err = mv.numberIn(unit(positive, "GPa"))
+		h.Value, err = mv.numberIn(interval{lo: 0, hi: MaxModulus, openLo: true, unit: "GPa"})
 		s.param("stress", name+" Sheorey modulus Eh", h.Value, "GPa", src, false)
 	}
 	if err != nil {
@@ -189,7 +192,7 @@ func (s *Site) readHorizontal(v node, name, src string, isMax bool) (insitu.Hori
 		if h.Kind != insitu.Gradient {
 			return h, 0, ov.errf("offset goes with gradient only, not with %s", law).is(ErrConflict)
 		}
-		if h.Offset, err = ov.numberIn(unit(nonNegative, "MPa")); err != nil {
+		if h.Offset, err = ov.numberIn(stressRange); err != nil {
 			return h, 0, err
 		}
 		s.param("stress", name+" offset at surface", h.Offset, "MPa", src, false)
@@ -209,7 +212,7 @@ func (s *Site) readHorizontal(v node, name, src string, isMax bool) (insitu.Hori
 }
 
 func (s *Site) readMeasured(m *fields, src string) error {
-	zref, zgiven, err := m.optNumber("reference_depth", unit(nonNegative, "m"), 0)
+	zref, zgiven, err := m.optNumber("reference_depth", depthRange, 0)
 	if err != nil {
 		return err
 	}
@@ -250,7 +253,7 @@ func (s *Site) readMeasured(m *fields, src string) error {
 			if err != nil {
 				return err
 			}
-			isrc, err := im.optText("source")
+			isrc, err := im.source()
 			if err != nil {
 				return err
 			}
@@ -262,7 +265,7 @@ func (s *Site) readMeasured(m *fields, src string) error {
 					return im.missing(k, " (each principal stress has magnitude MPa, trend ° and plunge °)")
 				}
 			}
-			if mags[i], err = im.vals["magnitude"].numberIn(unit(nonNegative, "MPa")); err != nil {
+			if mags[i], err = im.vals["magnitude"].numberIn(stressRange); err != nil {
 				return err
 			}
 			if axes[i].Trend, err = im.vals["trend"].numberIn(unit(interval{lo: 0, hi: 360}, "°")); err != nil {
@@ -292,7 +295,7 @@ func (s *Site) readMeasured(m *fields, src string) error {
 		if err != nil {
 			return err
 		}
-		tsrc, err := tm.optText("source")
+		tsrc, err := tm.source()
 		if err != nil {
 			return err
 		}
@@ -305,7 +308,7 @@ func (s *Site) readMeasured(m *fields, src string) error {
 			if !ok {
 				return tm.missing(k, " (a tensor gives all six of nn, ee, dd, ne, nd, ed in MPa, compression positive)")
 			}
-			if c[i], err = kv.number(); err != nil {
+			if c[i], err = kv.numberIn(interval{lo: -MaxStress, hi: MaxStress, unit: "MPa"}); err != nil {
 				return err
 			}
 			s.param("stress", "σ"+k, c[i], "MPa", tsrc, false)

@@ -16,10 +16,16 @@ import (
 // PlaneReader streams planes from a CSV table. The header row is required;
 // columns may come in any order; the known columns are name, dip,
 // dip_direction or strike (right-hand rule), depth, friction, cohesion and
-// pore_pressure, and any other column is carried through untouched. Lines
-// starting with # are comments. Lines are 1-indexed.
+// pore_pressure, and any other column is carried through untouched, unless
+// its name is within an edit or two of a known one (then it is taken for a
+// misspelling and is an error that names the known column). Lines
+// starting with # are comments; a leading byte-order mark is skipped. Text
+// must be UTF-8 without control characters (carried columns may hold tabs
+// and line breaks). A row may be at most MaxRow bytes and the header
+// MaxColumns columns. Lines are 1-indexed.
 type PlaneReader struct {
 	file       string
+	g          *guard
 	r          *csv.Reader
 	idx        [nCols]int // column index, −1 when absent
 	extra      []int      // indexes of the extra columns
@@ -32,26 +38,38 @@ type PlaneReader struct {
 
 // NewPlaneReader reads the header of the table in r; file names it in errors.
 func NewPlaneReader(r io.Reader, file string, d planeDefaults) (*PlaneReader, error) {
-	cr := csv.NewReader(r)
-	cr.ReuseRecord = true
-	cr.TrimLeadingSpace = true
-	cr.Comment = '#'
-	cr.FieldsPerRecord = -1 // checked in Next, to say how many were found
-	pr := &PlaneReader{file: file, r: cr, defaults: d}
+	g := newGuard(r, file)
+	cr := g.csvReader()
+	pr := &PlaneReader{file: file, g: g, r: cr, defaults: d}
 	head, err := cr.Read()
 	if errors.Is(err, io.EOF) {
 		return nil, &Error{File: file, Err: ErrEmpty, Msg: "empty: want a header row naming the columns (name, dip, dip_direction, depth, …)"}
 	}
 	if err != nil {
-		return nil, pr.csvError(err)
+		return nil, g.csvError(err)
 	}
 	line, _ := cr.FieldPos(0)
+	if sep := separatorHint(head); sep != "" {
+		return nil, &Error{File: file, Line: line, Err: ErrSyntax, Msg: fmt.Sprintf("the header is one column holding %ss: this looks like a %s-separated file; cleft reads comma-separated tables (save it as CSV with commas)", sep, sep)}
+	}
+	if len(head) > MaxColumns {
+		return nil, &Error{File: file, Line: line, Err: ErrLimit, Msg: fmt.Sprintf("the header has %d columns: at most %d", len(head), MaxColumns)}
+	}
 	pr.width = len(head)
 	for i := range pr.idx {
 		pr.idx[i] = -1
 	}
+	known := make([]string, 0, nCols)
+	for c, name := range colNames {
+		if c != colWeight || d.readings { // a planes table carries a weight column through
+			known = append(known, name)
+		}
+	}
 	seen := map[string]bool{}
 	for i, h := range head {
+		if j := badText(h, false); j >= 0 {
+			return nil, &Error{File: file, Line: line, Column: i + 1, Err: ErrEncoding, Msg: fmt.Sprintf("column %d of the header: %s", i+1, textProblem(h, j))}
+		}
 		h = strings.ToLower(strings.TrimSpace(strings.TrimPrefix(h, "\ufeff")))
 		if h == "" {
 			return nil, &Error{File: file, Line: line, Err: ErrMissing, Msg: fmt.Sprintf("column %d has an empty name in the header", i+1)}
@@ -60,17 +78,21 @@ func NewPlaneReader(r io.Reader, file string, d planeDefaults) (*PlaneReader, er
 			return nil, &Error{File: file, Line: line, Key: h, Err: ErrDuplicate, Msg: "this column appears twice in the header"}
 		}
 		seen[h] = true
-		known := false
+		if k := nearColumn(h, known); k != "" {
+			return nil, &Error{File: file, Line: line, Column: i + 1, Key: fmt.Sprintf("%s (column %d)", h, i+1), Err: ErrUnknownKey,
+				Msg: fmt.Sprintf("unknown column; did you mean %q? A name this close to a known column is taken for a misspelling: correct it, or rename the column to carry it through", k)}
+		}
+		isKnown := false
 		for c, name := range colNames {
 			if c == colWeight && !d.readings {
-				continue // a planes table carries a weight column through
+				continue
 			}
 			if h == name {
 				pr.idx[c] = i
-				known = true
+				isKnown = true
 			}
 		}
-		if !known {
+		if !isKnown {
 			pr.extra = append(pr.extra, i)
 			pr.ExtraNames = append(pr.ExtraNames, h)
 		}
@@ -79,7 +101,7 @@ func NewPlaneReader(r io.Reader, file string, d planeDefaults) (*PlaneReader, er
 		pr.present[c] = pr.idx[c] >= 0
 	}
 	need := func(c int, why string) error {
-		return &Error{File: file, Line: line, Err: ErrMissing, Msg: fmt.Sprintf("the header has no %q column%s; it has: %s", colNames[c], why, strings.Join(head, ", "))}
+		return &Error{File: file, Line: line, Err: ErrMissing, Msg: fmt.Sprintf("the header has no %q column%s; it has: %s", colNames[c], why, listColumns(head))}
 	}
 	switch {
 	case !pr.present[colName] && !d.readings:
@@ -96,14 +118,6 @@ func NewPlaneReader(r io.Reader, file string, d planeDefaults) (*PlaneReader, er
 	return pr, nil
 }
 
-func (pr *PlaneReader) csvError(err error) error {
-	var pe *csv.ParseError
-	if errors.As(err, &pe) {
-		return &Error{File: pr.file, Line: pe.Line, Err: ErrSyntax, Msg: "not valid CSV: " + pe.Err.Error()}
-	}
-	return &Error{File: pr.file, Err: ErrRead, Msg: err.Error()}
-}
-
 // Next reads the next plane into p. It returns io.EOF after the last row.
 // p.Extras is reused between calls when it has the capacity.
 func (pr *PlaneReader) Next(p *Plane) error {
@@ -112,7 +126,7 @@ func (pr *PlaneReader) Next(p *Plane) error {
 		if errors.Is(err, io.EOF) {
 			return io.EOF
 		}
-		return pr.csvError(err)
+		return pr.g.csvError(err)
 	}
 	line, _ := pr.r.FieldPos(0)
 	if len(rec) != pr.width {
@@ -123,15 +137,25 @@ func (pr *PlaneReader) Next(p *Plane) error {
 			pr.vals[c] = rec[i]
 		}
 	}
-	extras := p.Extras[:0]
-	q, err := parsePlane(&pr.vals, &pr.present, pr.defaults, func(col int, kind error, format string, a ...any) error {
+	errAt := func(col int, kind error, format string, a ...any) error {
 		return &Error{File: pr.file, Line: line, Column: pr.idx[col] + 1, Key: fmt.Sprintf("%s (column %d)", colNames[col], pr.idx[col]+1), Err: kind, Msg: fmt.Sprintf(format, a...)}
-	})
+	}
+	if i := pr.idx[colName]; i >= 0 {
+		if j := badText(rec[i], false); j >= 0 {
+			return errAt(colName, ErrEncoding, "%s", textProblem(rec[i], j))
+		}
+	}
+	extras := p.Extras[:0]
+	for k, i := range pr.extra {
+		if j := badText(rec[i], true); j >= 0 {
+			l, _ := pr.r.FieldPos(i)
+			return &Error{File: pr.file, Line: l, Column: i + 1, Key: fmt.Sprintf("%s (column %d)", pr.ExtraNames[k], i+1), Err: ErrEncoding, Msg: textProblem(rec[i], j)}
+		}
+		extras = append(extras, rec[i])
+	}
+	q, err := parsePlane(&pr.vals, &pr.present, pr.defaults, errAt)
 	if err != nil {
 		return err
-	}
-	for _, i := range pr.extra {
-		extras = append(extras, rec[i])
 	}
 	*p = q
 	p.Line = line
@@ -155,12 +179,14 @@ type PlaneStream struct {
 	closer     io.Closer
 	inlineSet  int // index of "set" among ExtraNames for inline planes, or −1
 	pad        int // empty extras appended to table rows
+	siteFile   string
+	names      nameCheck
 }
 
 // OpenPlanes opens the planes of s. table, when not empty, names a CSV file
 // (or "-" for stdin) that replaces the site's planes.
 func (s *Site) OpenPlanes(table string, stdin io.Reader) (*PlaneStream, error) {
-	ps := &PlaneStream{inlineSet: -1}
+	ps := &PlaneStream{inlineSet: -1, siteFile: s.File}
 	var r io.Reader
 	name := table
 	switch {
@@ -239,6 +265,7 @@ func (ps *PlaneStream) Next(p *Plane) error {
 		}
 		*p = q
 		p.Extras = extras
+		ps.names.add(p, false, ps.siteFile)
 		return nil
 	}
 	if ps.table == nil {
@@ -250,6 +277,7 @@ func (ps *PlaneStream) Next(p *Plane) error {
 	for range ps.pad {
 		p.Extras = append(p.Extras, "")
 	}
+	ps.names.add(p, true, ps.tableName)
 	return nil
 }
 

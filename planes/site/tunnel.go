@@ -2,14 +2,15 @@ package site
 
 import (
 	"cleft/planes/tunnel"
-	"encoding/csv"
 	"errors"
 	"fmt"
 	"io"
 	"math"
-	"strconv"
 	"strings"
 )
+
+// chainageRange is the range of a chainage along a tunnel.
+var chainageRange = interval{lo: 0, hi: MaxLength, unit: "m"}
 
 func (s *Site) readTunnel(v node) error {
 	m, err := v.mapping("alignment", "cover", "cover_file", "spacing", "radius", "rock", "sets", "wall_pore_pressure",
@@ -41,8 +42,8 @@ func (s *Site) readTunnel(v node) error {
 			dst *float64
 			iv  interval
 		}{
-			{"from", &l.From, unit(nonNegative, "m")},
-			{"to", &l.To, unit(nonNegative, "m")},
+			{"from", &l.From, chainageRange},
+			{"to", &l.To, chainageRange},
 			{"trend", &l.Trend, unit(interval{lo: 0, hi: 360}, "°")},
 			{"plunge", &l.Plunge, unit(interval{lo: -45, hi: 45}, "°")},
 		} {
@@ -82,16 +83,19 @@ func (s *Site) readTunnel(v node) error {
 		if err != nil {
 			return err
 		}
+		if len(items) > MaxCoverPoints {
+			return cv.errf("%d points: at most %d", len(items), MaxCoverPoints).is(ErrLimit)
+		}
 		for _, it := range items {
 			pair, err := it.list()
 			if err != nil || len(pair) != 2 {
 				return it.errf("want a pair [chainage, cover] in m")
 			}
-			ch, err := pair[0].numberIn(unit(nonNegative, "m"))
+			ch, err := pair[0].numberIn(chainageRange)
 			if err != nil {
 				return err
 			}
-			c, err := pair[1].numberIn(unit(nonNegative, "m"))
+			c, err := pair[1].numberIn(depthRange)
 			if err != nil {
 				return err
 			}
@@ -116,14 +120,15 @@ func (s *Site) readTunnel(v node) error {
 		if err != nil {
 			return err
 		}
+		s.CoverFile = path
 	}
 	var given bool
-	if t.Spacing, given, err = m.optNumber("spacing", unit(positive, "m"), 50); err != nil {
+	if t.Spacing, given, err = m.optNumber("spacing", interval{lo: 0, hi: MaxLength, openLo: true, unit: "m"}, 50); err != nil {
 		return err
 	} else if !given {
 		defaults = append(defaults, "spacing = 50 m")
 	}
-	if t.Radius, given, err = m.optNumber("radius", unit(positive, "m"), 1); err != nil {
+	if t.Radius, given, err = m.optNumber("radius", interval{lo: 0, hi: MaxRadius, openLo: true, unit: "m"}, 1); err != nil {
 		return err
 	} else if !given {
 		defaults = append(defaults, "radius = 1 m")
@@ -140,7 +145,7 @@ func (s *Site) readTunnel(v node) error {
 	if !ok {
 		return rm.missing("ucs", " (MPa, uniaxial compressive strength of the intact rock)")
 	}
-	if t.UCS, err = uv.numberIn(unit(positive, "MPa")); err != nil {
+	if t.UCS, err = uv.numberIn(interval{lo: 0, hi: MaxStress, openLo: true, unit: "MPa"}); err != nil {
 		return err
 	}
 	if t.Poisson, given, err = rm.optNumber("poisson", interval{lo: 0, hi: 0.5, openHi: true}, 0.25); err != nil {
@@ -170,6 +175,14 @@ func (s *Site) readTunnel(v node) error {
 		t.Drained = w == "drained"
 	} else {
 		defaults = append(defaults, "wall_pore_pressure = drained (Pp = 0 at the wall)")
+	}
+	if l := t.Legs[len(t.Legs)-1].To - t.Legs[0].From; l/t.Spacing+1 > MaxStations {
+		at := v
+		if sv, ok := m.get("spacing"); ok {
+			at = sv
+		}
+		return at.errf("spacing %s m over the %g m of the alignment makes %.0f stations: at most %d (a spacing of at least %.3g m)",
+			fmtNum(t.Spacing), l, math.Floor(l/t.Spacing)+1, MaxStations, l/(MaxStations-1)).is(ErrLimit)
 	}
 	if err := readZoneKeys(m, t, &defaults); err != nil {
 		return err
@@ -227,16 +240,16 @@ func checkProfile(c [][2]float64) error {
 
 // readCover reads a cover profile table with columns chainage and cover.
 func readCover(r io.Reader, name string) ([][2]float64, error) {
-	cr := csv.NewReader(r)
-	cr.Comment = '#'
-	cr.TrimLeadingSpace = true
+	g := newGuard(r, name)
+	cr := g.csvReader()
 	head, err := cr.Read()
 	if errors.Is(err, io.EOF) {
 		return nil, &Error{File: name, Err: ErrEmpty, Msg: "empty: want a header row with chainage and cover"}
 	}
 	if err != nil {
-		return nil, &Error{File: name, Err: ErrSyntax, Msg: "not valid CSV: " + err.Error()}
+		return nil, g.csvError(err)
 	}
+	head = append([]string(nil), head...) // the reader reuses its record
 	ic, iv := -1, -1
 	for i, h := range head {
 		switch strings.ToLower(strings.TrimSpace(h)) {
@@ -255,15 +268,25 @@ func readCover(r io.Reader, name string) ([][2]float64, error) {
 		if errors.Is(err, io.EOF) {
 			break
 		}
-		line, _ := cr.FieldPos(0)
 		if err != nil {
-			return nil, &Error{File: name, Line: line, Err: ErrSyntax, Msg: "not valid CSV: " + err.Error()}
+			return nil, g.csvError(err)
+		}
+		line, _ := cr.FieldPos(0)
+		if len(rec) != len(head) {
+			return nil, &Error{File: name, Line: line, Err: ErrSyntax, Msg: fmt.Sprintf("this row has %d values and the header %d columns", len(rec), len(head))}
+		}
+		if len(out) == MaxCoverPoints {
+			return nil, &Error{File: name, Line: line, Err: ErrLimit, Msg: fmt.Sprintf("more than %d points in the cover profile", MaxCoverPoints)}
 		}
 		var p [2]float64
 		for j, i := range []int{ic, iv} {
-			v, err := strconv.ParseFloat(strings.TrimSpace(rec[i]), 64)
-			if err != nil || math.IsNaN(v) || math.IsInf(v, 0) || v < 0 {
-				return nil, &Error{File: name, Line: line, Key: head[i], Err: ErrRange, Msg: fmt.Sprintf("%q: want a number ≥ 0 (m)", rec[i])}
+			v, ok := ParseNumber(rec[i])
+			hi := MaxLength
+			if j == 1 {
+				hi = MaxDepth
+			}
+			if !ok || v < 0 || v > hi {
+				return nil, &Error{File: name, Line: line, Key: head[i], Err: ErrRange, Msg: fmt.Sprintf("%s: want a decimal number in [0, %g] m", Quote(strings.TrimSpace(rec[i])), hi)}
 			}
 			p[j] = v
 		}

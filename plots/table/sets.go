@@ -55,15 +55,17 @@ func AssessedSets(a *assess.Assessment) [][]string {
 
 // Readings is readings.csv: each reading with the weight used, its set and
 // its angle to its set's mean pole, then the input's other columns (its own
-// set column as field_set).
+// set column as field_set, any other name already taken with InputPrefix).
 func Readings(g *sets.Grouping, readings []site.Plane, extras []string) [][]string {
 	head := []string{"name", "dip", "dip_direction", "depth_m", "weight", "set", "angle_to_mean_deg"}
-	for _, e := range extras {
+	own := make([]string, len(extras))
+	for i, e := range extras {
 		if e == "set" {
 			e = "field_set" // the input's own set column, kept beside ours
 		}
-		head = append(head, e)
+		own[i] = e
 	}
+	head = append(head, Carried(head, own)...)
 	rows := [][]string{head}
 	for i, r := range readings {
 		row := []string{r.Name, Cell(r.Orientation.Dip()), Cell(r.Orientation.DipDirection()), Cell(r.Depth), Cell(g.Weight(i)), g.Assigned(i), Cell(g.Analysis.AngleToMean[i])}

@@ -17,6 +17,8 @@ func Grouping(g *sets.Grouping) string {
 		fmt.Fprintf(&b, "%d sets from the given seeds by spherical k-means on axes.", n)
 	case !an.Auto:
 		fmt.Fprintf(&b, "%d sets as asked, by spherical k-means on axes (k-means++ starts, best of ten, fixed seed).", n)
+	case len(an.Scores) <= 2: // no grouping into two sets or more could be tried
+		fmt.Fprintf(&b, "%s too few to compare groupings into sets: one set.", Plural(len(g.Poles), "reading is", "readings are"))
 	default:
 		var sc []string
 		for k := 2; k < len(an.Scores); k++ {

@@ -50,6 +50,9 @@ func Summary(f assess.Facts) []string {
 func Limit(f assess.Facts) string {
 	best, exceeded := f.Largest()
 	l := f.Limits[best]
+	if math.IsNaN(l.Ratio) {
+		return fmt.Sprintf("The frictional-limit check does not apply at %s m: there is no stress there (the ground surface), so the effective principal stress ratio is undefined.", Depths(f.Depths))
+	}
 	if len(exceeded) == 0 {
 		return fmt.Sprintf("The stress model passes the frictional-limit check at %s m: the largest effective principal stress ratio (σ1 − αPp)/(σ3 − αPp) is %.2f, at %g m, against the limit of %.2f for μ = %.4g.",
 			Depths(f.Depths), l.Ratio, f.Depths[best], l.Limit, l.Friction)

@@ -1,0 +1,18 @@
+//go:build unix
+
+package main
+
+import (
+	"errors"
+	"syscall"
+)
+
+// processAlive reports whether process pid is running (or may be: one we
+// may not signal counts as running).
+func processAlive(pid int) bool {
+	if pid <= 0 {
+		return false
+	}
+	err := syscall.Kill(pid, 0)
+	return err == nil || errors.Is(err, syscall.EPERM)
+}
