@@ -97,6 +97,7 @@ type Path struct {
 	Plane string // plane keys only
 
 	file      string
+	where     string // the key path in the file, e.g. cases.low-k.stress.shmax.ratio
 	line, col int
 	valid     interval
 }
@@ -109,7 +110,11 @@ func (p Path) Valid() (lo, hi float64, openLo, openHi bool) {
 
 // Errorf returns an *Error at the path's line.
 func (p Path) Errorf(kind error, format string, a ...any) *Error {
-	return &Error{File: p.file, Line: p.line, Column: p.col, Key: p.Text, Err: kind, Msg: fmt.Sprintf(format, a...)}
+	key := p.where
+	if key == "" {
+		key = p.Text
+	}
+	return &Error{File: p.file, Line: p.line, Column: p.col, Key: key, Err: kind, Msg: fmt.Sprintf(format, a...)}
 }
 
 // keySpec is what a fixed path means: its key and valid range.
@@ -189,7 +194,7 @@ var fixedPaths = map[string]keySpec{
 // checks that it names a numeric key this site uses. root is the site
 // file's top mapping.
 func (s *Site) parsePath(at node, text string, root node) (Path, error) {
-	p := Path{Text: text, file: at.file, line: at.line, col: 0}
+	p := Path{Text: text, file: at.file, where: at.path, line: at.line, col: 0}
 	if p.line == 0 && at.n != nil {
 		p.line, p.col = at.n.Line, at.n.Column
 	}

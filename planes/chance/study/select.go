@@ -51,7 +51,7 @@ func selectPercentiles(v []float64, keys []uint64, counts []int32, gather []uint
 		frac[j] = h - float64(k)
 	}
 	var val [6]uint64
-	bin, within := -1, 0 // the bin of each wanted rank (ranks ascend) and the place in it
+	bin := -1 // the bin of the last wanted rank
 	start := below
 	g := gather[:0]
 	for q, rk := range ranks {
@@ -62,6 +62,9 @@ func selectPercentiles(v []float64, keys []uint64, counts []int32, gather []uint
 		case rk >= n-above:
 			val[q] = posInf
 			continue
+		}
+		if rk < start { // ranks of neighbouring percentiles may overlap
+			bin, start = -1, below
 		}
 		if bin < 0 || rk-start >= int(counts[bin]) {
 			if bin < 0 {
@@ -79,8 +82,7 @@ func selectPercentiles(v []float64, keys []uint64, counts []int32, gather []uint
 			}
 			slices.Sort(g)
 		}
-		within = rk - start
-		val[q] = g[within]
+		val[q] = g[rk-start]
 	}
 	var out [3]float64
 	for j := range Percentiles {
