@@ -27,6 +27,7 @@ type Report struct {
 	Sets      *Table  // joint sets of the field readings, or nil
 	Slope     *Table  // the rock-slope screening, or nil
 	Tunnel    *Table  // the tunnel screening, or nil
+	Chance    *Table  // the cases and the Monte Carlo, or nil
 	Figures   []Figure
 	Criterion string // the site criterion in words
 	Caution   string
@@ -94,7 +95,7 @@ type Figure struct {
 var page string
 
 var tmpl = template.Must(template.New("report").Funcs(template.FuncMap{
-	"inc":     func(i int) int { return i + 1 },
+	"inc": func(i int) int { return i + 1 },
 	"cls": func(t *Table, i int) template.HTMLAttr {
 		switch {
 		case i < len(t.Numeric) && t.Numeric[i]:

@@ -10,6 +10,7 @@ type CaseRun struct {
 	Name    string     // site.BaseCase for the site as given
 	Case    *site.Case // nil for the base
 	Results []planes.Result
+	Depths  []float64 // of each target in this case (planes.NAME.depth may change it)
 }
 
 // Cases resolves every target in the base site and in each of its cases,
@@ -34,12 +35,14 @@ func Cases(s *site.Site, targets []Target) ([]CaseRun, error) {
 			}
 		}
 		run.Results = make([]planes.Result, len(targets))
+		run.Depths = make([]float64, len(targets))
 		for i := range targets {
 			p := targets[i].Plane
 			if run.Case != nil {
 				run.Case.ApplyPlanes(&p)
 			}
 			v.Resolve(&p, &run.Results[i])
+			run.Depths[i] = p.Depth
 		}
 	}
 	return runs, nil
