@@ -137,7 +137,7 @@ func runAssess(o assessOptions, stdout, stderr io.Writer) error {
 	rep := a.report(o.example, facts, figs)
 	if ch != nil {
 		rep.Chance = ch.reportTable(a)
-		rep.Summary = append(rep.Summary, ch.lines(a)...)
+		rep.Summary = append(rep.Summary, ch.summary()...)
 	}
 	if err := out.tables(
 		namedTable{"report.html", rep.WriteHTML},

@@ -151,6 +151,10 @@ func (ch *chances) print(b *strings.Builder, a *screened) {
 	}
 }
 
+// summary are the sentences of the cases and the Monte Carlo for the
+// report's summary.
+func (ch *chances) summary() []string { return words.ChanceLines(ch.targets, ch.runs, ch.out) }
+
 // lines are the sentences of the cases, the Monte Carlo, the slope and the
 // tunnel.
 func (ch *chances) lines(a *screened) []string {

@@ -182,37 +182,47 @@ func SlopeChanceLines(sc *slope.Screening, out *study.Outcome) []string {
 	return lines
 }
 
-// TunnelChanceLines puts the tunnel's odds in words: for each target, the
-// largest P(unstable) along the alignment and where, and at how many
-// stations it reaches one half.
+// TunnelChanceLines puts the tunnel's odds in one sentence: for each
+// target, the largest P(unstable) along the alignment and where, and at
+// how many stations it reaches one half; the most likely first.
 func TunnelChanceLines(sc *tunnel.Screening, out *study.Outcome) []string {
-	var lines []string
-	for k, tg := range sc.Targets {
-		best, at, half := -1.0, 0.0, 0
-		for _, o := range out.Tunnel {
-			if o.Target != k {
-				continue
-			}
-			if o.P > best {
-				best, at = o.P, sc.Stations[o.Station].Chainage
-			}
-			if o.P >= 0.5 {
-				half++
-			}
-		}
-		where := fmt.Sprintf("at %s of the %d", Plural(half, "station", "stations"), len(sc.Stations))
-		if half == 0 {
-			where = fmt.Sprintf("at none of the %d stations", len(sc.Stations))
-		}
-		lines = append(lines, fmt.Sprintf("Along the tunnel, %s is critical or opening in the far field with P up to %.2f (chainage %g m); P ≥ 0.5 %s.",
-			tg.Name, best, at, where))
+	type worst struct {
+		name     string
+		p, at    float64
+		half     int
+		position int
 	}
-	return lines
+	ws := make([]worst, len(sc.Targets))
+	for k, tg := range sc.Targets {
+		ws[k] = worst{name: tg.Name, p: -1, position: k}
+	}
+	for _, o := range out.Tunnel {
+		w := &ws[o.Target]
+		if o.P > w.p {
+			w.p, w.at = o.P, sc.Stations[o.Station].Chainage
+		}
+		if o.P >= 0.5 {
+			w.half++
+		}
+	}
+	sort.SliceStable(ws, func(a, b int) bool { return ws[a].p > ws[b].p })
+	var parts []string
+	for _, w := range ws {
+		s := fmt.Sprintf("%s %.2f at chainage %g m", w.name, w.p, w.at)
+		if w.p == 0 {
+			s = fmt.Sprintf("%s 0", w.name)
+		}
+		if w.half > 0 {
+			s += fmt.Sprintf(" (0.5 or more at %s)", Plural(w.half, "station", "stations"))
+		}
+		parts = append(parts, s)
+	}
+	return []string{fmt.Sprintf("Along the tunnel (%d stations), the largest probability of being critical or opening in the far field at the axis depth: %s.", len(sc.Stations), strings.Join(parts, "; "))}
 }
 
 // Proportion writes a probability with its standard error, the error to
-// one significant digit and the probability to the same decimal:
-// "0.61 ± 0.01", "0.058 ± 0.002"; "0 (of N)" style zero errors as "± 0".
+// one significant digit and the probability to the same decimal (at least
+// two): "0.61 ± 0.01", "0.058 ± 0.002"; "1.00 ± 0" when the error is 0.
 func Proportion(p, se float64) string {
 	if se == 0 {
 		return fmt.Sprintf("%.2f ± 0", p)
