@@ -234,27 +234,26 @@ func (ch *chances) figures(a *screened) []*namedFigure {
 // reportTable is the report's section on the cases and the Monte Carlo.
 func (ch *chances) reportTable(a *screened) *report.Table {
 	t := &report.Table{Notes: ch.lines(a)}
-	t.Notes = append(t.Notes, "The least sure planes and set means, least sure first (every one of them is in chance.csv and cases.csv). P is the share of realisations in which the plane is critical or opening, ± its standard error; “—” where there is no Monte Carlo or the percentile falls on an opening realisation. These probabilities are no better than the distributions given for the inputs.")
-	t.Columns = []string{"plane", "dip/dip dir.", "depth m", "base", "cases unstable", "P(critical)", "P(opening)", "P(unstable)", "FS 5 %", "FS 50 %", "FS 95 %", "robust", "driver (ρ)"}
-	t.Numeric = []bool{false, true, true, false, true, true, true, true, true, true, true, false, false}
-	t.NoWrap = []bool{3: true, 7: true}
-	for _, i := range words.ChanceOrder(ch.targets, ch.runs, ch.out)[:min(25, len(ch.targets))] {
+	t.Notes = append(t.Notes, "The least sure planes and set means, least sure first (every one of them is in chance.csv and cases.csv). P(unstable) is the share of realisations in which the plane is critical or opening, ± its standard error (P(critical) and P(opening) apart are in chance.csv); “—” where there is no Monte Carlo or the percentile falls on an opening realisation. These probabilities are no better than the distributions given for the inputs.")
+	t.Columns = []string{"plane", "dip/dip dir.", "depth m", "base", "cases unstable", "P(unstable)", "FS 5 %", "FS 50 %", "FS 95 %", "robust", "driver (ρ)"}
+	t.Numeric = []bool{false, true, true, false, true, true, true, true, true, false, false}
+	t.NoWrap = []bool{0: true, 3: true, 5: true}
+	for _, i := range words.ChanceOrder(ch.targets, ch.runs, ch.out)[:min(15, len(ch.targets))] {
 		tg := &ch.targets[i]
-		row := []string{tg.Plane.Name, tg.Plane.Orientation.String(), words.Num(tg.Plane.Depth), words.StateLabel(tg.Base.State), "—", "—", "—", "—", "—", "—", "—", "—", "—"}
+		row := []string{tg.Plane.Name, tg.Plane.Orientation.String(), words.Num(tg.Plane.Depth), words.StateLabel(tg.Base.State), "—", "—", "—", "—", "—", "—", "—"}
 		if len(ch.runs) > 1 {
 			row[4] = fmt.Sprintf("%d of %d", study.Critical(ch.runs, i), len(ch.runs))
-			row[11] = "no"
+			row[9] = "no"
 			if study.Robust(ch.runs, i) {
-				row[11] = "yes"
+				row[9] = "yes"
 			}
 		}
 		if o := ch.out; o != nil {
 			d := o.Odds[i]
-			row[5], row[6] = words.Fixed(d.PCritical, 3), words.Fixed(d.POpening, 3)
-			row[7] = fmt.Sprintf("%.3f ± %.3f", d.PUnstable, d.StdErr)
-			row[8], row[9], row[10] = words.Fixed(d.FS[0], 2), words.Fixed(d.FS[1], 2), words.Fixed(d.FS[2], 2)
+			row[5] = words.Proportion(d.PUnstable, d.StdErr)
+			row[6], row[7], row[8] = words.Fixed(d.FS[0], 2), words.Fixed(d.FS[1], 2), words.Fixed(d.FS[2], 2)
 			if d.Driver >= 0 {
-				row[12] = fmt.Sprintf("%s (%s)", o.Inputs[d.Driver], words.Signed(d.Rho[d.Driver]))
+				row[10] = fmt.Sprintf("%s (%s)", o.Inputs[d.Driver], words.Signed(d.Rho[d.Driver]))
 			}
 		}
 		t.Rows = append(t.Rows, report.Row{Class: tg.Base.State.String(), Cells: row})

@@ -79,3 +79,28 @@ func BenchmarkRun(b *testing.B) {
 		})
 	}
 }
+
+func BenchmarkStats20000(b *testing.B) {
+	rng := rand.New(rand.NewPCG(3, 3))
+	const n = 20000
+	v := make([]float64, n)
+	for i := range v {
+		v[i] = 1 + 0.3*rng.NormFloat64()
+	}
+	keys, tmp := make([]uint64, n), make([]uint64, n)
+	idx, tmpIdx := make([]int32, n), make([]int32, n)
+	counts := make([]int32, selectBins)
+	b.Run("select", func(b *testing.B) {
+		for b.Loop() {
+			selectPercentiles(v, keys, counts, tmp)
+		}
+	})
+	b.Run("radix-with-index", func(b *testing.B) {
+		for b.Loop() {
+			for i, x := range v {
+				keys[i], idx[i] = orderBits(x), int32(i)
+			}
+			radixSort(keys, tmp, idx, tmpIdx)
+		}
+	})
+}

@@ -25,7 +25,7 @@ func newWorkspace(n int) *workspace {
 	return &workspace{
 		fs: make([]float64, n), ts: make([]float64, n), pts: make([]float64, n),
 		keys: make([]uint64, n), tmp: make([]uint64, n),
-		idx: make([]int32, n), tmpIdx: make([]int32, n), rank: make([]float64, n), counts: make([]int32, 1<<16),
+		idx: make([]int32, n), tmpIdx: make([]int32, n), rank: make([]float64, n), counts: make([]int32, selectBins),
 	}
 }
 

@@ -7,86 +7,181 @@ import (
 	"cleft/planes/chance"
 )
 
+// selectBins is the number of bins of selectPercentiles.
+const selectBins = 1 << 12
+
+// orderBits of −Inf and +Inf.
+const negInfKey, posInfKey = 0x000fffffffffffff, 0xfff0000000000000
+
 // selectPercentiles returns the type-7 percentiles (chance.Percentile) of
-// v at Percentiles without sorting v: each needs the order statistics ⌊h⌋
-// and ⌊h⌋ + 1, h = (n − 1)·p. The finite values' order-preserving keys
-// (orderBits) are binned into 1<<16 equal ranges between their least and
-// largest; the bins that hold the wanted ranks are gathered and sorted
-// (±Inf are counted apart, below and above every bin). keys, counts and
-// gather are buffers (n, 1<<16 and n long). v must hold no NaN; it is left
-// as it was.
+// v at Percentiles without sorting v: each needs the order statistics
+// x(⌊h⌋) and x(⌊h⌋ + 1), h = (n − 1)·p. The finite values' order-preserving
+// keys (orderBits) are binned into selectBins equal ranges between their
+// least and largest; one pass gathers the members of the bins that hold
+// the wanted ranks, each of which is then narrowed by binning it again in
+// place until a few keys are left to sort (a radix select). x(⌊h⌋ + 1) comes
+// from one more pass: the least key above x(⌊h⌋), unless x(⌊h⌋) repeats.
+// ±Inf are counted apart, below and above every bin. keys and gather are
+// buffers n long, counts selectBins long. v must hold no NaN; it is left as
+// it was.
 func selectPercentiles(v []float64, keys []uint64, counts []int32, gather []uint64) [3]float64 {
 	n := len(v)
-	const negInf, posInf = 0x000fffffffffffff, 0xfff0000000000000 // orderBits(∓Inf)
 	lo, hi := ^uint64(0), uint64(0)
 	below, above := 0, 0
 	for i, x := range v {
 		k := orderBits(x)
 		keys[i] = k
 		switch {
-		case k == negInf:
+		case k == negInfKey:
 			below++
-		case k == posInf:
+		case k == posInfKey:
 			above++
 		default:
 			lo, hi = min(lo, k), max(hi, k)
 		}
 	}
-	shift := 0
-	if below+above < n {
-		shift = max(0, bits.Len64(hi-lo)-16)
-	}
-	clear(counts)
-	for _, k := range keys[:n] {
-		if k != negInf && k != posInf {
-			counts[(k-lo)>>shift]++
-		}
-	}
-	var ranks [6]int // ⌊h⌋ and ⌊h⌋ + 1 for each percentile
+	finite := n - below - above
+	var first [3]int // the rank ⌊h⌋ of each percentile
 	var frac [3]float64
 	for j, p := range Percentiles {
 		h := float64(n-1) * p
-		k := int(h)
-		ranks[2*j], ranks[2*j+1] = k, min(k+1, n-1)
-		frac[j] = h - float64(k)
+		first[j] = int(h)
+		frac[j] = h - float64(first[j])
 	}
-	var val [6]uint64
-	bin := -1 // the bin of the last wanted rank
-	start := below
-	g := gather[:0]
-	for q, rk := range ranks {
-		switch {
-		case rk < below:
-			val[q] = negInf
-			continue
-		case rk >= n-above:
-			val[q] = posInf
+	var bin [3]int
+	counts = counts[:selectBins]
+	shift := 0
+	if finite > 0 {
+		shift = max(0, bits.Len64(hi-lo)-bits.Len(selectBins-1))
+		clear(counts)
+		for _, k := range keys[:n] {
+			if k != negInfKey && k != posInfKey {
+				counts[(k-lo)>>shift]++
+			}
+		}
+	}
+	var within [3]int
+	for j, rk := range first {
+		bin[j] = -1
+		if rk < below || rk >= below+finite {
 			continue
 		}
-		if rk < start { // ranks of neighbouring percentiles may overlap
-			bin, start = -1, below
+		start, b := below, 0
+		for rk-start >= int(counts[b]) {
+			start += int(counts[b])
+			b++
 		}
-		if bin < 0 || rk-start >= int(counts[bin]) {
-			if bin < 0 {
-				bin = 0
+		bin[j], within[j] = b, rk-start
+	}
+	// Gather the wanted bins in one pass, each into its own stretch.
+	var wanted []int
+	var size, off [3]int
+	for _, b := range bin {
+		if b >= 0 && !slices.Contains(wanted, b) {
+			size[len(wanted)] = int(counts[b])
+			wanted = append(wanted, b)
+		}
+	}
+	total := 0
+	for w := range wanted {
+		off[w] = total
+		total += size[w]
+	}
+	if len(wanted) > 0 {
+		fill := off
+		for _, k := range keys[:n] {
+			if k == negInfKey || k == posInfKey {
+				continue
 			}
-			for rk-start >= int(counts[bin]) {
-				start += int(counts[bin])
-				bin++
-			}
-			g = g[:0]
-			for _, k := range keys[:n] {
-				if k != negInf && k != posInf && int((k-lo)>>shift) == bin {
-					g = append(g, k)
+			b := int((k - lo) >> shift)
+			for w, wb := range wanted {
+				if b == wb {
+					gather[fill[w]] = k
+					fill[w]++
+					break
 				}
 			}
-			slices.Sort(g)
 		}
-		val[q] = g[rk-start]
+	}
+	// x(⌊h⌋) of each percentile.
+	var x0, x1 [3]uint64
+	for j, rk := range first {
+		switch {
+		case rk < below:
+			x0[j] = negInfKey
+		case rk >= below+finite:
+			x0[j] = posInfKey
+		default:
+			w := slices.Index(wanted, bin[j])
+			x0[j] = radixSelect(gather[off[w]:off[w]+size[w]], within[j], counts)
+		}
+	}
+	// x(⌊h⌋ + 1): from the counts of keys at or below x(⌊h⌋) and the least key
+	// above it, in one pass.
+	var atOrBelow [3]int
+	var next [3]uint64
+	for j := range next {
+		next[j] = posInfKey
+	}
+	for _, k := range keys[:n] {
+		for j := range 3 {
+			if k <= x0[j] {
+				atOrBelow[j]++
+			} else if k < next[j] {
+				next[j] = k
+			}
+		}
+	}
+	for j, rk := range first {
+		switch {
+		case rk+1 >= n:
+			x1[j] = x0[j]
+		case atOrBelow[j] > rk+1:
+			x1[j] = x0[j]
+		default:
+			x1[j] = next[j]
+		}
 	}
 	var out [3]float64
 	for j := range Percentiles {
-		out[j] = chance.Percentile([]float64{fromOrderBits(val[2*j]), fromOrderBits(val[2*j+1])}, frac[j])
+		out[j] = chance.Percentile([]float64{fromOrderBits(x0[j]), fromOrderBits(x1[j])}, frac[j])
 	}
 	return out
+}
+
+// radixSelect returns the key of rank r (0-based) in sub, reordering sub
+// in place: it bins sub into selectBins ranges between its least and
+// largest key, moves the members of the bin that holds rank r to the front,
+// and repeats on them until few are left, which it sorts. counts is a
+// buffer selectBins long.
+func radixSelect(sub []uint64, r int, counts []int32) uint64 {
+	for len(sub) > 64 {
+		lo, hi := sub[0], sub[0]
+		for _, k := range sub {
+			lo, hi = min(lo, k), max(hi, k)
+		}
+		if lo == hi {
+			return lo
+		}
+		shift := max(0, bits.Len64(hi-lo)-bits.Len(selectBins-1))
+		clear(counts)
+		for _, k := range sub {
+			counts[(k-lo)>>shift]++
+		}
+		start, b := 0, 0
+		for r-start >= int(counts[b]) {
+			start += int(counts[b])
+			b++
+		}
+		i := 0
+		for j, k := range sub {
+			if int((k-lo)>>shift) == b {
+				sub[i], sub[j] = sub[j], sub[i]
+				i++
+			}
+		}
+		sub, r = sub[:i], r-start
+	}
+	slices.Sort(sub)
+	return sub[r]
 }

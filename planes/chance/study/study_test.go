@@ -331,7 +331,7 @@ func TestRadixSortAndSelection(t *testing.T) {
 					t.Fatalf("position %d: %v (index %d), want %v", i, got, idx[i], want[i])
 				}
 			}
-			got := selectPercentiles(v, make([]uint64, n), make([]int32, 1<<16), make([]uint64, n))
+			got := selectPercentiles(v, make([]uint64, n), make([]int32, selectBins), make([]uint64, n))
 			for j, p := range Percentiles {
 				w := chance.Percentile(want, p)
 				if !(got[j] == w || (math.IsNaN(got[j]) && math.IsNaN(w))) {
