@@ -1,6 +1,9 @@
 package study
 
-import "math"
+import (
+	"math"
+	stdbits "math/bits"
+)
 
 // orderBits maps a float64 that is not NaN to a uint64 in the same order
 // (−Inf lowest, +Inf highest; −0 just below +0): the sign bit flipped for a
@@ -31,10 +34,28 @@ func radixSort(keys, tmp []uint64, idx, tmpIdx []int32) {
 		return
 	}
 	const bits, mask = 11, 1<<11 - 1
+	// Only the digits below the highest bit in which keys differ need a
+	// pass: the keys are taken relative to their least.
+	lo, hi := keys[0], keys[0]
+	for _, k := range keys {
+		lo, hi = min(lo, k), max(hi, k)
+	}
+	if lo == hi {
+		return
+	}
+	for i := range keys {
+		keys[i] -= lo
+	}
+	defer func() {
+		for i := range keys {
+			keys[i] += lo
+		}
+	}()
+	top := uint(stdbits.Len64(hi - lo))
 	var count [1 << bits]int
 	src, dst := keys, tmp[:n]
 	si, di := idx, tmpIdx
-	for shift := uint(0); shift < 64; shift += bits {
+	for shift := uint(0); shift < top; shift += bits {
 		count = [1 << bits]int{}
 		for _, k := range src {
 			count[(k>>shift)&mask]++

@@ -19,9 +19,8 @@ const negInfKey, posInfKey = 0x000fffffffffffff, 0xfff0000000000000
 // keys (orderBits) are binned into selectBins equal ranges between their
 // least and largest; one pass gathers the members of the bins that hold
 // the wanted ranks, each of which is then narrowed by binning it again in
-// place until a few keys are left to sort (a radix select). x(⌊h⌋ + 1) comes
-// from one more pass: the least key above x(⌊h⌋), unless x(⌊h⌋) repeats.
-// ±Inf are counted apart, below and above every bin. keys and gather are
+// place until a few keys are left to sort (a radix select; selecting twice
+// in one bin is fine, since it only reorders the bin). ±Inf are counted apart, below and above every bin. keys and gather are
 // buffers n long, counts selectBins long. v must hold no NaN; it is left as
 // it was.
 func selectPercentiles(v []float64, keys []uint64, counts []int32, gather []uint64) [3]float64 {
@@ -41,14 +40,14 @@ func selectPercentiles(v []float64, keys []uint64, counts []int32, gather []uint
 		}
 	}
 	finite := n - below - above
-	var first [3]int // the rank ⌊h⌋ of each percentile
+	var ranks [6]int // ⌊h⌋ and ⌊h⌋ + 1 of each percentile
 	var frac [3]float64
 	for j, p := range Percentiles {
 		h := float64(n-1) * p
-		first[j] = int(h)
-		frac[j] = h - float64(first[j])
+		k := int(h)
+		ranks[2*j], ranks[2*j+1] = k, min(k+1, n-1)
+		frac[j] = h - float64(k)
 	}
-	var bin [3]int
 	counts = counts[:selectBins]
 	shift := 0
 	if finite > 0 {
@@ -60,9 +59,10 @@ func selectPercentiles(v []float64, keys []uint64, counts []int32, gather []uint
 			}
 		}
 	}
-	var within [3]int
-	for j, rk := range first {
-		bin[j] = -1
+	// The bin of each finite wanted rank, and the rank's place in it.
+	var bin, within [6]int
+	for q, rk := range ranks {
+		bin[q] = -1
 		if rk < below || rk >= below+finite {
 			continue
 		}
@@ -71,11 +71,11 @@ func selectPercentiles(v []float64, keys []uint64, counts []int32, gather []uint
 			start += int(counts[b])
 			b++
 		}
-		bin[j], within[j] = b, rk-start
+		bin[q], within[q] = b, rk-start
 	}
 	// Gather the wanted bins in one pass, each into its own stretch.
 	var wanted []int
-	var size, off [3]int
+	var size, off [6]int
 	for _, b := range bin {
 		if b >= 0 && !slices.Contains(wanted, b) {
 			size[len(wanted)] = int(counts[b])
@@ -88,63 +88,37 @@ func selectPercentiles(v []float64, keys []uint64, counts []int32, gather []uint
 		total += size[w]
 	}
 	if len(wanted) > 0 {
+		// counts is reused as a table from bin to slot + 1 (0: not wanted).
+		clear(counts)
+		for w, b := range wanted {
+			counts[b] = int32(w + 1)
+		}
 		fill := off
 		for _, k := range keys[:n] {
 			if k == negInfKey || k == posInfKey {
 				continue
 			}
-			b := int((k - lo) >> shift)
-			for w, wb := range wanted {
-				if b == wb {
-					gather[fill[w]] = k
-					fill[w]++
-					break
-				}
+			if w := counts[(k-lo)>>shift] - 1; w >= 0 {
+				gather[fill[w]] = k
+				fill[w]++
 			}
 		}
 	}
-	// x(⌊h⌋) of each percentile.
-	var x0, x1 [3]uint64
-	for j, rk := range first {
+	var val [6]uint64
+	for q, rk := range ranks {
 		switch {
 		case rk < below:
-			x0[j] = negInfKey
+			val[q] = negInfKey
 		case rk >= below+finite:
-			x0[j] = posInfKey
+			val[q] = posInfKey
 		default:
-			w := slices.Index(wanted, bin[j])
-			x0[j] = radixSelect(gather[off[w]:off[w]+size[w]], within[j], counts)
-		}
-	}
-	// x(⌊h⌋ + 1): from the counts of keys at or below x(⌊h⌋) and the least key
-	// above it, in one pass.
-	var atOrBelow [3]int
-	var next [3]uint64
-	for j := range next {
-		next[j] = posInfKey
-	}
-	for _, k := range keys[:n] {
-		for j := range 3 {
-			if k <= x0[j] {
-				atOrBelow[j]++
-			} else if k < next[j] {
-				next[j] = k
-			}
-		}
-	}
-	for j, rk := range first {
-		switch {
-		case rk+1 >= n:
-			x1[j] = x0[j]
-		case atOrBelow[j] > rk+1:
-			x1[j] = x0[j]
-		default:
-			x1[j] = next[j]
+			w := slices.Index(wanted, bin[q])
+			val[q] = radixSelect(gather[off[w]:off[w]+size[w]], within[q], counts)
 		}
 	}
 	var out [3]float64
 	for j := range Percentiles {
-		out[j] = chance.Percentile([]float64{fromOrderBits(x0[j]), fromOrderBits(x1[j])}, frac[j])
+		out[j] = chance.Percentile([]float64{fromOrderBits(val[2*j]), fromOrderBits(val[2*j+1])}, frac[j])
 	}
 	return out
 }
