@@ -108,8 +108,11 @@ func ChanceOf(targets []study.Target, runs []study.CaseRun, out *study.Outcome, 
 	if out != nil {
 		o := out.Odds[i]
 		p := fmt.Sprintf("P(%s) %s", unstableWord(opens), Proportion(o.PUnstable, o.StdErr))
-		if o.PUnstable == 0 || o.PUnstable == 1 {
-			p = fmt.Sprintf("P(%s) %.0f in %d realisations (at most about %.1g either way: the rule of three)", unstableWord(opens), o.PUnstable, out.N, 3/float64(out.N))
+		switch o.PUnstable {
+		case 0:
+			p = fmt.Sprintf("P(%s) 0 in %d realisations (95 %% upper bound about 3/N = %.2g, the rule of three)", unstableWord(opens), out.N, 3/float64(out.N))
+		case 1:
+			p = fmt.Sprintf("P(%s) 1 in %d realisations (95 %% lower bound about 1 − 3/N = %.4g, the rule of three)", unstableWord(opens), out.N, 1-3/float64(out.N))
 		}
 		switch {
 		case math.IsNaN(o.FS[0]) && !math.IsNaN(o.FS[2]):
