@@ -51,7 +51,7 @@ least stable three, and the frictional-limit check of the stress model.
 				o.site = args[0]
 			}
 			o.warn = cmd.ErrOrStderr()
-			return runAssess(o, cmd.OutOrStdout())
+			return runAssess(o, cmd.OutOrStdout(), cmd.ErrOrStderr())
 		},
 	}
 	c.Flags().BoolVar(&o.example, "example", false, "assess the built-in demo site (invented data)")
@@ -85,7 +85,7 @@ func screenAll(s *site.Site) (*screened, error) {
 	return sc, nil
 }
 
-func runAssess(o assessOptions, stdout io.Writer) error {
+func runAssess(o assessOptions, stdout, stderr io.Writer) error {
 	if o.out == "" {
 		return usagef("give --out DIR, the folder for the outputs")
 	}
@@ -107,6 +107,12 @@ func runAssess(o assessOptions, stdout io.Writer) error {
 		return err
 	}
 	warnRepeats(o.warn, a.Repeat, a.Repeats, false)
+	var ch *chances // with cases: or uncertainty:
+	if len(s.Cases) > 0 || s.Uncertainty != nil {
+		if ch, err = runChances(a, chanceOptions{}, stderr); err != nil {
+			return err
+		}
+	}
 	if err := makeDir(o.out); err != nil {
 		return err
 	}
@@ -119,6 +125,9 @@ func runAssess(o assessOptions, stdout io.Writer) error {
 		return err
 	}
 	figs := a.figures()
+	if ch != nil {
+		figs = append(figs, ch.figures(a)...)
+	}
 	if err := out.figures(figs); err != nil {
 		return err
 	}
@@ -132,11 +141,18 @@ func runAssess(o assessOptions, stdout io.Writer) error {
 	if a.Grouping != nil {
 		more = append(more, csvTable("sets.csv", table.AssessedSets(a.Assessment)))
 	}
+	if ch != nil {
+		more = append(more, ch.tables(a)...)
+	}
 	if err := out.tables(more...); err != nil {
 		return err
 	}
 	facts := a.Facts()
 	rep := a.report(o.example, facts, figs)
+	if ch != nil {
+		rep.Chance = ch.reportTable(a)
+		rep.Summary = append(rep.Summary, ch.summary()...)
+	}
 	if err := out.tables(
 		namedTable{"report.html", rep.WriteHTML},
 		namedTable{"summary.json", func(w io.Writer) error { return writeJSON(w, newSummaryDoc(s.Name, facts)) }},
@@ -152,6 +168,10 @@ func runAssess(o assessOptions, stdout io.Writer) error {
 	if a.tunnel != nil {
 		b.WriteString("\n")
 		printTunnel(&b, a.tunnel)
+	}
+	if ch != nil {
+		b.WriteString("\n")
+		ch.print(&b, a)
 	}
 	fmt.Fprintf(&b, "\nWrote %d files to %s: %s.\n\n%s\n", len(out.wrote), o.out, strings.Join(out.names(), ", "), caution)
 	_, err = io.WriteString(stdout, b.String())

@@ -75,10 +75,15 @@ func tunnelFiles() []string {
 	return append([]string{"stations.csv", "wall.csv", "profile.csv", "zones.csv"}, figureFiles("tunnel-profile", "tunnel-section", "tunnel-wall")...)
 }
 
+func chanceFiles() []string {
+	return append([]string{"cases.csv", "chance.csv", "sensitivity.csv", "chance-slope.csv", "chance-tunnel.csv"}, figureFiles("chance-stereonet", "chance-sensitivity")...)
+}
+
 func assessFiles() []string {
 	out := []string{"planes.csv", "planes.json", "stress.json", "report.html", "summary.json", "sets.csv"}
 	out = append(out, figureFiles("stereonet-slip", "stereonet-dilation", "mohr", "sets-density")...)
 	out = append(out, slopeFiles()...)
+	out = append(out, chanceFiles()...)
 	return append(out, tunnelFiles()...)
 }
 

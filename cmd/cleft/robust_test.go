@@ -287,6 +287,7 @@ func TestOutputListsAreComplete(t *testing.T) {
 		{[]string{"slope", filepath.Join(ex, "site.yaml")}, slopeFiles()},
 		{[]string{"tunnel", filepath.Join(ex, "site.yaml")}, tunnelFiles()},
 		{[]string{"sets", filepath.Join(ex, "readings.csv")}, setsFiles()},
+		{[]string{"chance", filepath.Join(ex, "site.yaml")}, chanceFiles()},
 	} {
 		t.Run(c.args[0], func(t *testing.T) {
 			out := filepath.Join(dir, c.args[0])

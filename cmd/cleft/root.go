@@ -86,6 +86,7 @@ below ground; angles in degrees, azimuths clockwise from north.
 		newSetsCmd(),
 		newSlopeCmd(),
 		newTunnelCmd(),
+		newChanceCmd(),
 		newExampleCmd(),
 	)
 	root.CompletionOptions.DisableDefaultCmd = true

@@ -11,6 +11,7 @@ const (
 	purposeRealisation uint64 = iota
 	purposeInput
 	purposeScores
+	purposeItem
 )
 
 // StreamKey returns the ChaCha8 key of the random stream of one realisation
@@ -32,6 +33,18 @@ func StreamKey(seed uint64, realisation int) [32]byte {
 // order in which realisations run.
 func Stream(seed uint64, realisation int) *rand.Rand {
 	return rand.New(rand.NewChaCha8(StreamKey(seed, realisation)))
+}
+
+// ItemStream returns a new generator for one item (a plane, say) whose draws
+// are taken in realisation order by the one goroutine that handles the
+// item: the ChaCha8 stream keyed by (seed, an item tag, item). Its keys
+// never equal those of Stream or of Draw's inputs. ItemStream panics if item
+// is negative.
+func ItemStream(seed uint64, item int) *rand.Rand {
+	if item < 0 {
+		panic("chance: negative item")
+	}
+	return rand.New(rand.NewChaCha8(key(seed, purposeItem, uint64(item))))
 }
 
 func key(seed, purpose, index uint64) [32]byte {

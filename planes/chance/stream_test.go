@@ -75,6 +75,7 @@ func TestStreamsDistinct(t *testing.T) {
 		{"seed 2 realisation 0", StreamKey(2, 0)},
 		{"seed 1 input 0", key(1, purposeInput, 0)},
 		{"seed 1 scores 0", key(1, purposeScores, 0)},
+		{"seed 1 item 0", key(1, purposeItem, 0)},
 	} {
 		v := first(c.k)
 		if s, ok := seen[v]; ok {
@@ -83,6 +84,10 @@ func TestStreamsDistinct(t *testing.T) {
 		seen[v] = c.name
 	}
 	wantPanic(t, func() { StreamKey(1, -1) })
+	wantPanic(t, func() { ItemStream(1, -1) })
+	if a, b := ItemStream(1, 0).Uint64(), rand.NewChaCha8(key(1, purposeItem, 0)).Uint64(); a != b {
+		t.Errorf("ItemStream(1, 0) starts %d, want the stream keyed (1, item, 0): %d", a, b)
+	}
 }
 
 func TestNeighbouringStreamsUncorrelated(t *testing.T) {

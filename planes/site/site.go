@@ -67,6 +67,14 @@ type Site struct {
 	// (re-orthogonalised axes, say).
 	Notes []string
 
+	// Cases are the named bracketing cases of cases:, in file order; nil
+	// without them.
+	Cases []Case
+	// Uncertainty is the Monte Carlo of uncertainty:, or nil.
+	Uncertainty *Uncertainty
+
+	root      node     // the file's top mapping, for dotted paths
+	base      *Variant // the site's own values, copied by Variant
 	summary   []string // parts of Summary
 	inlineSet bool     // some inline plane has set:
 	fsys      fs.FS    // where planes_file is read from; nil for the OS
@@ -196,7 +204,7 @@ var parserProblems = []string{
 	"found duplicate %TAG directive",
 }
 
-var topKeys = []string{"site", "depth", "stress", "water", "strength", "planes", "planes_file", "readings_file", "sets", "slope", "tunnel", "report"}
+var topKeys = []string{"site", "depth", "stress", "water", "strength", "planes", "planes_file", "readings_file", "sets", "slope", "tunnel", "report", "cases", "uncertainty"}
 
 func (s *Site) read(root node) error {
 	f, err := root.mapping(topKeys...)
@@ -281,7 +289,9 @@ func (s *Site) read(root node) error {
 			return err
 		}
 	}
-	return nil
+	s.root = root
+	s.base = s.newBase()
+	return s.readChance(f)
 }
 
 func (s *Site) param(group, name string, value float64, unit, source string, def bool) {

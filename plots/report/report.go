@@ -30,6 +30,7 @@ type Report struct {
 	SlopeReadings *Table
 	Tunnel        *Table // the tunnel screening, or nil
 	Zones         *Table // the tunnel's slip zones, shown before Tunnel, or nil
+	Chance        *Table // the cases and the Monte Carlo, or nil
 	Figures       []Figure
 	Criterion     string // the site criterion in words
 	Caution       string

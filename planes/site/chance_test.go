@@ -1,0 +1,162 @@
+package site
+
+import (
+	"errors"
+	"fmt"
+	"math"
+	"math/rand/v2"
+	"strings"
+	"testing"
+
+	"cleft/planes"
+)
+
+const chanceBase = `site: t
+depth: 150
+stress:
+  vertical: {density: 2650}
+  shmax: {ratio: 1.35, azimuth: 128}
+  shmin: {ratio: 0.72}
+water: {table: 18}
+strength: {friction: 0.6}
+planes:
+  - {name: F1, dip: 74, dip_direction: 188, depth: 180, friction: 0.45}
+  - {name: B1, dip: 14, dip_direction: 200}
+`
+
+func TestChanceErrors(t *testing.T) {
+	// Each mistake is one *Error naming the file, the line and the path.
+	for _, c := range []struct {
+		name, yaml string
+		line       int
+		key, kind  string
+		want       error
+	}{
+		{"unknown path", "cases:\n  a: {stress.shmax.ratoi: 1.2}\n", 13, "cases.a.stress.shmax.ratoi", "did you mean \"stress.shmax.ratio\"", ErrUnknownKey},
+		{"not a number", "cases:\n  a: {stress.shmax: 1.2}\n", 13, "cases.a.stress.shmax", "not a number", ErrNotNumber},
+		{"other law", "cases:\n  a: {stress.shmax.gradient: 0.03}\n", 13, "cases.a.stress.shmax.gradient", "follows ratio", ErrUnknownKey},
+		{"case out of range", "cases:\n  a: {strength.friction: 0}\n", 13, "cases.a.strength.friction", "outside the allowed range (0, ∞)", ErrRange},
+		{"case model", "cases:\n  a: {stress.shmax.ratio: 0.6}\n", 13, "cases.a", "less than shmin", ErrRange},
+		{"base name", "cases:\n  base: {water.table: 3}\n", 13, "cases.base", "the site as given", ErrConflict},
+		{"no plane", "cases:\n  a: {planes.F9.friction: 0.3}\n", 13, "cases.a.planes.F9.friction", "no plane or set mean is named \"F9\"", ErrMissing},
+		{"plane column", "cases:\n  a: {planes.F1.name: 3}\n", 13, "cases.a.planes.F1.name", "not a number", ErrNotNumber},
+		{"dist range", "uncertainty:\n  vary:\n    strength.friction: {uniform: [-0.1, 0.5]}\n", 14, "uncertainty.vary.strength.friction.uniform", "low -0.1 is outside", ErrRange},
+		{"dist family", "uncertainty:\n  vary:\n    strength.friction: {beta: [1, 2]}\n", 14, "uncertainty.vary.strength.friction.beta", "unknown key", ErrUnknownKey},
+		{"dist count", "uncertainty:\n  vary:\n    water.table: {triangular: [1, 2]}\n", 14, "uncertainty.vary.water.table.triangular", "takes 3 numbers", ErrType},
+		{"truncation", "uncertainty:\n  vary:\n    water.table: {uniform: [5, 20], min: 30, max: 40}\n", 14, "uncertainty.vary.water.table", "no probability", ErrRange},
+		{"correlation path", "uncertainty:\n  vary:\n    water.table: {uniform: [5, 30]}\n  correlations: [[water.table, strength.friction, 0.5]]\n", 15, "uncertainty.correlations[0]", "not one of the varied paths", ErrMissing},
+		{"nothing varies", "uncertainty:\n  seed: 3\n", 12, "uncertainty", "nothing varies", ErrMissing},
+		{"realisations", "uncertainty:\n  realisations: 1.5\n  vary:\n    water.table: {uniform: [5, 30]}\n", 13, "uncertainty.realisations", "outside the allowed range", ErrRange},
+	} {
+		t.Run(c.name, func(t *testing.T) {
+			_, err := Parse([]byte(chanceBase+c.yaml), "t.yaml")
+			var e *Error
+			if !errors.As(err, &e) {
+				t.Fatalf("error %v, want a *site.Error", err)
+			}
+			if e.File != "t.yaml" || e.Line != c.line || e.Key != c.key || !strings.Contains(e.Msg, c.kind) || !errors.Is(err, c.want) {
+				t.Errorf("got %q (line %d, key %q, kind %v)\nwant line %d, key %q, %q, %v", err, e.Line, e.Key, e.Err, c.line, c.key, c.kind, c.want)
+			}
+		})
+	}
+}
+
+func TestTruncationToTheValidRange(t *testing.T) {
+	// A sample outside the key's valid range is never used: friction
+	// normal(0.1, 0.2) is truncated to μ > 0. Its mean is then the
+	// truncated-normal mean μ + σφ(α)/(1 − Φ(α)), α = −μ/σ (Johnson, Kotz &
+	// Balakrishnan 1994; derived: 0.1 + 0.2·φ(−0.5)/Φ(0.5) = 0.2018). The
+	// quantiles at 0 and 1 stay inside (0, ∞).
+	s, err := Parse([]byte(chanceBase+"uncertainty:\n  vary:\n    strength.friction: {normal: [0.1, 0.2]}\n"), "t.yaml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	d := s.Uncertainty.Vary[0].Dist
+	const tol = 1e-4
+	phi := math.Exp(-0.125) / math.Sqrt(2*math.Pi)
+	want := 0.1 + 0.2*phi/(0.5*math.Erfc(-0.5/math.Sqrt2))
+	if math.Abs(want-0.2018) > 1e-4 || math.Abs(d.Mean()-want) > tol {
+		t.Errorf("mean %v, want %v (0.2018)", d.Mean(), want)
+	}
+	if lo := d.Quantile(0); !(lo > 0) {
+		t.Errorf("Quantile(0) = %v, want > 0", lo)
+	}
+	rng := rand.New(rand.NewPCG(1, 1))
+	sum := 0.0
+	const n = 100000
+	for range n {
+		x := d.Quantile(rng.Float64())
+		if !(x > 0) {
+			t.Fatalf("sample %v ≤ 0", x)
+		}
+		sum += x
+	}
+	// Within 4 standard errors; the sd of the truncated normal is below σ.
+	if se := 0.2 / math.Sqrt(n); math.Abs(sum/n-want) > 4*se {
+		t.Errorf("sample mean %v, want %v ± %v", sum/n, want, 4*se)
+	}
+	// An azimuth is not truncated but taken modulo 360°.
+	s, err = Parse([]byte(chanceBase+"cases:\n  a: {stress.shmax.azimuth: 370}\n"), "t.yaml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	if got := s.Cases[0].Overrides[0].Value; got != 10 {
+		t.Errorf("azimuth 370 taken as %v, want 10", got)
+	}
+}
+
+func TestVariantIsTheEditedFile(t *testing.T) {
+	// Setting a key on a Variant gives the model that the site file edited
+	// by hand gives, for a key of every block: the state at two depths and
+	// the criterion must agree.
+	for _, c := range []struct{ path, from, to string }{
+		{"stress.shmax.ratio", "ratio: 1.35", "ratio: 1.1"},
+		{"stress.shmax.azimuth", "azimuth: 128", "azimuth: 300"},
+		{"stress.shmin.ratio", "ratio: 0.72", "ratio: 0.6"},
+		{"stress.vertical.density", "density: 2650", "density: 2400"},
+		{"water.table", "table: 18", "table: 40"},
+		{"strength.friction", "friction: 0.6}", "friction: 0.5}"},
+	} {
+		t.Run(c.path, func(t *testing.T) {
+			edited := strings.Replace(chanceBase, c.from, c.to, 1)
+			if edited == chanceBase {
+				t.Fatalf("%q not in the site", c.from)
+			}
+			x := strings.Fields(strings.Trim(c.to, "}"))[1]
+			s, err := Parse([]byte(chanceBase+fmt.Sprintf("cases:\n  a: {%s: %s}\n", c.path, x)), "t.yaml")
+			if err != nil {
+				t.Fatal(err)
+			}
+			e, err := Parse([]byte(edited), "e.yaml")
+			if err != nil {
+				t.Fatal(err)
+			}
+			v := s.Variant()
+			if err := s.Cases[0].Apply(v); err != nil {
+				t.Fatal(err)
+			}
+			for _, z := range []float64{10, 180} {
+				if got, want := v.Model().At(z), e.Model.At(z); got != want {
+					t.Errorf("at %v m: %+v, want %+v", z, got, want)
+				}
+			}
+			if v.Criterion().String() != e.Criterion.String() {
+				t.Errorf("criterion %v, want %v", v.Criterion(), e.Criterion)
+			}
+			var got, want planes.Result
+			p := s.Planes[1]
+			v.Resolve(&p, &got)
+			e.Resolver().Resolve(&e.Planes[1], &want)
+			if got != want && !(math.IsNaN(got.Rake) && math.IsNaN(want.Rake)) {
+				t.Errorf("B1: %+v, want %+v", got, want)
+			}
+			v.Reset()
+			if err := v.Finish(); err != nil {
+				t.Fatal(err)
+			}
+			if got, want := v.Model().At(100), s.Model.At(100); got != want {
+				t.Errorf("after Reset: %+v, want the site's %+v", got, want)
+			}
+		})
+	}
+}
