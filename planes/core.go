@@ -44,18 +44,6 @@ func ResolveCore(r *Core, s *insitu.State, n r3.Vec, c Criterion) {
 			r.FactorOfSafety = c.Strength(en) / tau
 		}
 	}
-	// The tension cut-off, as in ResolveTo.
-	if crit := c.CriticalNormal(tau); crit > shearTol*scale {
-		r.PressureToSlip = (en - crit) / s.Biot
-	} else {
-		r.PressureToSlip = en / s.Biot
-	}
-	switch {
-	case en <= 0:
-		r.State = Opening
-	case r.FactorOfSafety <= 1:
-		r.State = Critical
-	default:
-		r.State = Stable
-	}
+	r.PressureToSlip, _ = pressureToSlip(en, c.CriticalNormal(tau), shearTol*scale, s.Biot)
+	r.State = stateFrom(en, r.FactorOfSafety)
 }

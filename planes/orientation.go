@@ -77,6 +77,12 @@ func MustNew(dip, dipDirection float64) Orientation {
 func build(dip, dd float64) Orientation {
 	sd, cd := geom.SinCosDeg(dip)
 	sa, ca := geom.SinCosDeg(dd)
+	return fromTrig(dip, dd, sd, cd, sa, ca)
+}
+
+// fromTrig is the plane of dip and dip direction dd (degrees) from their
+// sines and cosines.
+func fromTrig(dip, dd, sd, cd, sa, ca float64) Orientation {
 	return Orientation{
 		dip:    dip,
 		dd:     dd,

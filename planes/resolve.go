@@ -167,23 +167,8 @@ func ResolveTo(r *Result, s *insitu.State, o *Orientation, c Criterion) {
 		r.DilationTendency = math.Min(1, math.Max(0, (s1-sn)/d))
 	}
 
-	// The tension cut-off: min(σn' − σn'crit, σn'). A σn'crit within
-	// rounding of 0 (τ = c) counts as 0, so that the same plane typed two
-	// ways gets one verdict.
-	if crit := c.CriticalNormal(tau); crit > shearTol*scale {
-		r.PressureToSlip = (en - crit) / s.Biot
-	} else {
-		r.PressureToSlip, r.OpensFirst = en/s.Biot, true
-	}
-
-	switch {
-	case en <= 0:
-		r.State = Opening
-	case r.FactorOfSafety <= 1:
-		r.State = Critical
-	default:
-		r.State = Stable
-	}
+	r.PressureToSlip, r.OpensFirst = pressureToSlip(en, c.CriticalNormal(tau), shearTol*scale, s.Biot)
+	r.State = stateFrom(en, r.FactorOfSafety)
 }
 
 // trendDeg returns atan2(y, x) as an azimuth in degrees, [0, 360), without

@@ -39,12 +39,5 @@ func FromUnitNormal(n r3.Vec) Orientation {
 	ca, sa := -n.X/sd, -n.Y/sd
 	dip := math.Atan2(sd, cd) * geom.Deg
 	dd := geom.Azimuth(math.Atan2(sa, ca) * geom.Deg)
-	return Orientation{
-		dip:    dip,
-		dd:     dd,
-		built:  true,
-		pole:   r3.Vec{X: -sd * ca, Y: -sd * sa, Z: cd},
-		strike: r3.Vec{X: sa, Y: -ca},
-		updip:  r3.Vec{X: -cd * ca, Y: -cd * sa, Z: -sd},
-	}
+	return fromTrig(dip, dd, sd, cd, sa, ca)
 }

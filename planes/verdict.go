@@ -38,3 +38,30 @@ func StateOf(s *insitu.State, o *Orientation, c Criterion) PlaneState {
 	}
 	return Stable
 }
+
+// pressureToSlip is the rise in pore pressure that ends the plane's
+// stability, with the tension cut-off (see Result.PressureToSlip):
+//
+//	ΔPp = min(σn' − σn'crit, σn') / α
+//
+// crit is σn'crit; one within floor of 0 (τ = c) counts as 0, so that the
+// same plane typed two ways gets one verdict. opensFirst is true when the
+// cut-off governs. ResolveTo and ResolveCore both use it.
+func pressureToSlip(en, crit, floor, biot float64) (dp float64, opensFirst bool) {
+	if crit > floor {
+		return (en - crit) / biot, false
+	}
+	return en / biot, true
+}
+
+// stateFrom is the verdict from σn' and the factor of safety (NaN without
+// shear): opening, critical when FS ≤ 1, else stable.
+func stateFrom(en, fs float64) PlaneState {
+	switch {
+	case en <= 0:
+		return Opening
+	case fs <= 1:
+		return Critical
+	}
+	return Stable
+}

@@ -77,7 +77,7 @@ func MaxWallPrincipal(far insitu.Tensor, nu, support float64) Peak {
 			continue
 		}
 		th := float64(k) * step
-		x, fx := goldenMax(f, th-step, th+step, 1e-9)
+		x, fx := geom.GoldenMax(f, th-step, th+step, 1e-9)
 		if fx < v[k] {
 			x, fx = th, v[k]
 		}
@@ -99,29 +99,4 @@ func halfTurn(th float64) float64 {
 		th = 0 // a tiny negative th rounds up to 180 above; −0 becomes +0
 	}
 	return th
-}
-
-// goldenMax returns the point in [lo, hi] where f is largest and the value
-// there, by golden-section search to a bracket narrower than tol, for an f
-// with one maximum in the bracket. It does not allocate.
-func goldenMax(f func(float64) float64, lo, hi, tol float64) (x, fx float64) {
-	const g = 0.6180339887498949 // (√5 − 1)/2
-	x1 := hi - g*(hi-lo)
-	x2 := lo + g*(hi-lo)
-	f1, f2 := f(x1), f(x2)
-	for hi-lo > tol {
-		if f1 >= f2 {
-			hi, x2, f2 = x2, x1, f1
-			x1 = hi - g*(hi-lo)
-			f1 = f(x1)
-		} else {
-			lo, x1, f1 = x1, x2, f2
-			x2 = lo + g*(hi-lo)
-			f2 = f(x2)
-		}
-	}
-	if f1 >= f2 {
-		return x1, f1
-	}
-	return x2, f2
 }

@@ -3,6 +3,7 @@ package tunnel
 import (
 	"math"
 
+	"cleft/insitu/geom"
 	"cleft/insitu/opening"
 )
 
@@ -16,7 +17,7 @@ func (p *probe) refine(th, dth, r float64, mode int) (float64, float64) {
 		return p.edge(&y, r, mode)
 	}
 	const angleTol = 1e-6 // degrees
-	t, e := goldenMax(f, th-dth, th+dth, angleTol)
+	t, e := geom.GoldenMax(f, th-dth, th+dth, angleTol)
 	if e > r {
 		return t, e
 	}
@@ -47,29 +48,4 @@ func (p *probe) edge(y *opening.Ray, r0 float64, mode int) float64 {
 		hi = lo
 	}
 	return p.a
-}
-
-// goldenMax returns the point in [lo, hi] where f is largest and the value
-// there, by golden-section search to a bracket narrower than tol, for an f
-// with one maximum in the bracket.
-func goldenMax(f func(float64) float64, lo, hi, tol float64) (x, fx float64) {
-	const g = 0.6180339887498949 // (√5 − 1)/2
-	x1 := hi - g*(hi-lo)
-	x2 := lo + g*(hi-lo)
-	f1, f2 := f(x1), f(x2)
-	for hi-lo > tol {
-		if f1 >= f2 {
-			hi, x2, f2 = x2, x1, f1
-			x1 = hi - g*(hi-lo)
-			f1 = f(x1)
-		} else {
-			lo, x1, f1 = x1, x2, f2
-			x2 = lo + g*(hi-lo)
-			f2 = f(x2)
-		}
-	}
-	if f1 >= f2 {
-		return x1, f1
-	}
-	return x2, f2
 }
