@@ -82,3 +82,18 @@ func TestEigenDescending(t *testing.T) {
 		t.Error("NaN input decomposed")
 	}
 }
+
+func TestGoldenMax(t *testing.T) {
+	const tol = 1e-9
+	// A parabola's vertex and a sine's crest, known in closed form (common
+	// practice): −(x − 1.3)² on [0, 3] peaks at 1.3; sin x on [0, 3] at π/2.
+	if x, fx := GoldenMax(func(x float64) float64 { return -(x - 1.3) * (x - 1.3) }, 0, 3, tol); !scalar.EqualWithinAbs(x, 1.3, 10*tol) || fx > 0 {
+		t.Errorf("parabola: %v, %v", x, fx)
+	}
+	// At a smooth crest f changes by only ½f″·dx², so the place is found to
+	// about √ε ≈ 1.5e-8, whatever tol asks (common practice).
+	const place = 1e-7
+	if x, fx := GoldenMax(math.Sin, 0, 3, tol); !scalar.EqualWithinAbs(x, math.Pi/2, place) || !scalar.EqualWithinAbs(fx, 1, tol) {
+		t.Errorf("sine: %v, %v", x, fx)
+	}
+}
