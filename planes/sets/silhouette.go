@@ -161,12 +161,17 @@ const ChooseSample = 20000
 // through the input (with their weights): the choice then costs the same
 // for any number of readings.
 func ChooseK(normals []r3.Vec, o ClusterOptions, kmax int) (k int, scores []float64) {
-	if len(normals) > ChooseSample {
+	return chooseK(normals, o, kmax, ChooseSample)
+}
+
+// chooseK is ChooseK on at most sample readings.
+func chooseK(normals []r3.Vec, o ClusterOptions, kmax, sample int) (k int, scores []float64) {
+	if len(normals) > sample {
 		idx := make([]int, len(normals))
 		for i := range idx {
 			idx[i] = i
 		}
-		idx = spread(idx, ChooseSample)
+		idx = spread(idx, sample)
 		sub := make([]r3.Vec, len(idx))
 		var ws []float64
 		if o.Weights != nil {
