@@ -1,11 +1,12 @@
 // Command benchresolve measures cleft end to end: it builds cleft (or takes
 // -bin), writes the generated inputs each job needs, runs each job -runs
 // times as a child process and reports the median and best wall time, the
-// peak resident memory of the process and the ratio of the median to a
-// baseline: the figures recorded on main before the speed-ups (baseline.go),
-// or, with -base OLD-BINARY, the median of the same job run by that binary
-// in turn with the new one (paired runs). It is a benchmark script, not a
-// test: run it by hand,
+// median CPU time (user and system, less disturbed than the wall time on a
+// shared machine), the peak resident memory of the process, and the ratios
+// of the medians to a baseline: the figures recorded on main before the
+// speed-ups (baseline.go), or, with -base OLD-BINARY, those of the same job
+// run by that binary in turn with the new one (paired runs). It is a
+// benchmark script, not a test: run it by hand,
 //
 //	go run ./cmd/benchresolve                          # every job
 //	go run ./cmd/benchresolve -jobs sets-100k,resolve-1m -runs 5
@@ -96,7 +97,7 @@ func main() {
 	if *base != "" {
 		against = "paired, " + filepath.Base(*base)
 	}
-	fmt.Printf("%-12s %9s %9s %9s %10s %9s %7s  (baseline: %s)\n", "job", "median s", "best s", "RSS MB", "rows/s", "base s", "ratio", against)
+	fmt.Printf("%-12s %9s %9s %8s %8s %10s %9s %10s %7s %9s  (baseline: %s)\n", "job", "median s", "best s", "cpu s", "RSS MB", "rows/s", "base s", "base cpu s", "ratio", "cpu ratio", against)
 	for _, j := range jobs {
 		check(j.prepare(dir))
 		bins := []string{*bin}
@@ -104,31 +105,36 @@ func main() {
 			bins = append(bins, *base)
 		}
 		times := make([][]float64, len(bins))
+		cpus := make([][]float64, len(bins))
 		rss := make([]int64, len(bins))
 		for range *runs {
 			for b, exe := range bins {
 				if j.kind == "floor" {
 					exe = self
 				}
-				el, kb := run(exe, j.args(dir))
+				el, cpu, kb := run(exe, j.args(dir))
 				times[b] = append(times[b], el)
+				cpus[b] = append(cpus[b], cpu)
 				rss[b] = max(rss[b], kb)
 			}
 		}
-		med, best := median(times[0]), slices.Min(times[0])
-		baseS, ratio := "", ""
-		ref := recorded[j.name]
+		med, best, cpu := median(times[0]), slices.Min(times[0]), median(cpus[0])
+		baseS, baseCPU, ratio, cpuRatio := "", "", "", ""
+		ref, refCPU := recorded[j.name], recordedCPU[j.name]
 		if len(bins) > 1 {
-			ref = median(times[1])
+			ref, refCPU = median(times[1]), median(cpus[1])
 		}
 		if ref > 0 {
 			baseS, ratio = fmt.Sprintf("%.3f", ref), fmt.Sprintf("%.3f", med/ref)
+		}
+		if refCPU > 0 {
+			baseCPU, cpuRatio = fmt.Sprintf("%.2f", refCPU), fmt.Sprintf("%.3f", cpu/refCPU)
 		}
 		perS := ""
 		if j.n > 0 {
 			perS = fmt.Sprintf("%.0f", float64(j.n)/med)
 		}
-		fmt.Printf("%-12s %9.3f %9.3f %9.1f %10s %9s %7s\n", j.name, med, best, float64(rss[0])/1024, perS, baseS, ratio)
+		fmt.Printf("%-12s %9.3f %9.3f %8.2f %8.1f %10s %9s %10s %7s %9s\n", j.name, med, best, cpu, float64(rss[0])/1024, perS, baseS, baseCPU, ratio, cpuRatio)
 		j.cleanup(dir)
 	}
 }
@@ -197,10 +203,11 @@ func (j job) args(dir string) []string {
 	return []string{"resolve", filepath.Join(dir, "site.yaml"), "--planes", j.input(dir), "--out", out, "--format", j.format}
 }
 
-// run runs exe with args and returns the wall time in seconds and the peak
-// resident memory in kilobytes. Standard output and error are kept apart
-// from the terminal, so that no progress bar is drawn.
-func run(exe string, args []string) (float64, int64) {
+// run runs exe with args and returns the wall time and the CPU time (user
+// and system) in seconds and the peak resident memory in kilobytes.
+// Standard output and error are kept apart from the terminal, so that no
+// progress bar is drawn.
+func run(exe string, args []string) (float64, float64, int64) {
 	cmd := exec.Command(exe, args...)
 	var errs bytes.Buffer
 	cmd.Stderr = &errs
@@ -214,7 +221,8 @@ func run(exe string, args []string) (float64, int64) {
 	if ru, ok := cmd.ProcessState.SysUsage().(*syscall.Rusage); ok {
 		kb = ru.Maxrss // kilobytes on Linux
 	}
-	return el, kb
+	cpu := (cmd.ProcessState.UserTime() + cmd.ProcessState.SystemTime()).Seconds()
+	return el, cpu, kb
 }
 
 func median(v []float64) float64 {
