@@ -88,6 +88,11 @@ type GradientModel struct {
 	SHmax, Shmin     Horizontal
 	Azimuth          float64 // of SHmax, degrees clockwise from north
 	Water            Water
+
+	// The sine and cosine of Azimuth, computed once by NewGradientModel;
+	// used while trigAz still equals Azimuth.
+	sin, cos, trigAz float64
+	trig             bool
 }
 
 // NewGradientModel validates the parts and returns the model.
@@ -110,7 +115,19 @@ func NewGradientModel(gv float64, shmax, shmin Horizontal, azimuth float64, w Wa
 	if err := w.Validate(); err != nil {
 		return nil, fmt.Errorf("water: %w", err)
 	}
-	return &GradientModel{VerticalGradient: gv, SHmax: shmax, Shmin: shmin, Azimuth: geom.Azimuth(azimuth), Water: w}, nil
+	m := &GradientModel{VerticalGradient: gv, SHmax: shmax, Shmin: shmin, Azimuth: geom.Azimuth(azimuth), Water: w}
+	m.sin, m.cos = geom.SinCosDeg(m.Azimuth)
+	m.trigAz, m.trig = m.Azimuth, true
+	return m, nil
+}
+
+// sinCos returns the sine and cosine of the azimuth: those computed at
+// construction, or for a model built or changed otherwise, computed now.
+func (m *GradientModel) sinCos() (sin, cos float64) {
+	if m.trig && m.trigAz == m.Azimuth {
+		return m.sin, m.cos
+	}
+	return geom.SinCosDeg(m.Azimuth)
 }
 
 // Magnitudes returns SHmax, Shmin and Sv at depth z (m), MPa.
@@ -123,9 +140,10 @@ func (m *GradientModel) Magnitudes(z float64) (shmax, shmin, sv float64) {
 // At returns the state at depth z (m). SHmax may come out below Shmin at
 // some depths when the two follow different laws; the tensor is then still
 // the one the laws give, and the principal stresses are sorted as always.
+// The trigonometry of the azimuth is done once, at construction.
 func (m *GradientModel) At(z float64) State {
 	sh, sm, sv := m.Magnitudes(z)
-	st, ct := geom.SinCosDeg(m.Azimuth)
+	st, ct := m.sinCos()
 	p := Principal{
 		Values: [3]float64{sh, sm, sv},
 	}
@@ -135,7 +153,7 @@ func (m *GradientModel) At(z float64) State {
 	sortPrincipal(&p)
 	return State{
 		Depth:        z,
-		Total:        Andersonian(sh, sm, sv, m.Azimuth),
+		Total:        andersonian(sh, sm, sv, st, ct),
 		Principal:    p,
 		PorePressure: m.Water.Pressure(z),
 		Biot:         m.Water.Biot,

@@ -37,6 +37,11 @@ var componentNames = [6]string{"nn", "ee", "dd", "ne", "nd", "ed"}
 //	σ = SHmax·h hᵀ + Shmin·m mᵀ + Sv·z zᵀ,  h = (cos az, sin az, 0), m = (−sin az, cos az, 0)
 func Andersonian(shmax, shmin, sv, az float64) Tensor {
 	s, c := geom.SinCosDeg(az)
+	return andersonian(shmax, shmin, sv, s, c)
+}
+
+// andersonian is Andersonian with the azimuth given by its sine and cosine.
+func andersonian(shmax, shmin, sv, s, c float64) Tensor {
 	return Tensor{
 		NN: shmax*c*c + shmin*s*s,
 		EE: shmax*s*s + shmin*c*c,

@@ -36,7 +36,11 @@ type DensityNet struct {
 	Weights []float64
 	InSet   []bool // per reading: assigned to a set
 	Sets    []SetMark
-	Levels  []float64 // contour levels in σ; nil for 2, 4, 6, …
+	Levels  []float64 // contour levels in σ; nil for every 2σ (every 2·⌈max/40⌉σ past 40σ)
+	// MaxPoles is the most pole symbols drawn (0 for DefaultMaxPoles): with
+	// more readings, that many spread evenly through them are drawn, and
+	// the key says so. The density counts every reading.
+	MaxPoles int
 
 	// Field is the density at every node of the net and Kamb its counting,
 	// from NewDensityField: the caller computes them (FieldSize gives a
@@ -47,7 +51,9 @@ type DensityNet struct {
 
 // NewDensityField evaluates the Kamb density of the poles at every node of
 // an n × n net grid, in parallel over rows; nodes outside the primitive take
-// the value of the primitive point on their radius.
+// the value of the primitive point on their radius. The counting is
+// sets.KambCounter's, the same to the last bit as sets.Kamb.Density at each
+// node, in time O(n² + N) for N poles.
 func NewDensityField(p Projection, poles []r3.Vec, weights []float64, n int) (*Field, sets.Kamb) {
 	total := float64(len(poles))
 	if weights != nil { // weights scaled to sum to the number of readings
@@ -62,6 +68,7 @@ func NewDensityField(p Projection, poles []r3.Vec, weights []float64, n int) (*F
 		weights = scaled
 	}
 	k := sets.NewKamb(total)
+	kc := sets.NewKambCounter(k, poles, weights)
 	f := &Field{N: n, Values: make([]float64, n*n)}
 	rows := make(chan int, n)
 	for j := range n {
@@ -70,9 +77,8 @@ func NewDensityField(p Projection, poles []r3.Vec, weights []float64, n int) (*F
 	close(rows)
 	var wg sync.WaitGroup
 	for range runtime.GOMAXPROCS(0) {
-		wg.Add(1)
-		go func() {
-			defer wg.Done()
+		wg.Go(func() {
+			var scratch []int32
 			for j := range rows {
 				for i := range n {
 					pt := f.Node(i, j)
@@ -80,10 +86,10 @@ func NewDensityField(p Projection, poles []r3.Vec, weights []float64, n int) (*F
 						pt.X, pt.Y = pt.X/r, pt.Y/r
 					}
 					l, _ := p.Inverse(pt)
-					f.Values[j*n+i] = k.Density(l.Vec(), poles, weights)
+					f.Values[j*n+i], scratch = kc.Density(l.Vec(), scratch)
 				}
 			}
-		}()
+		})
 	}
 	wg.Wait()
 	f.Min, f.Max = math.Inf(1), math.Inf(-1)
@@ -123,8 +129,8 @@ func (d *DensityNet) Draw(c draw.Canvas) {
 	lab.blockText(f.keyRect())
 	lab.blockText(n.northBox(f.l))
 	// Poles: small dots, open for unassigned readings.
-	for i, p := range d.Poles {
-		at := n.pt(d.Proj.ProjectVec(p))
+	for _, i := range d.shown() {
+		at := n.pt(d.Proj.ProjectVec(d.Poles[i]))
 		readingGlyph(&c, at, d.InSet == nil || d.InSet[i], g)
 		lab.block(square(at, vg.Points(1.6*g+0.5)))
 	}
@@ -159,16 +165,45 @@ func readingGlyph(c *draw.Canvas, at vg.Point, inSet bool, g float64) {
 	c.DrawGlyph(draw.GlyphStyle{Color: poleInk, Radius: vg.Points(1.6 * g), Shape: draw.RingGlyph{}}, at)
 }
 
+// DefaultMaxPoles is the most pole symbols a DensityNet draws by default:
+// at a symbol of 1.3 pt on a net of about 170 pt radius, 5000 cover about a
+// third of the net, beyond which more symbols only hide the density.
+const DefaultMaxPoles = 5000
+
+// shown returns the indexes of the poles drawn: all, or MaxPoles of them
+// spread evenly through the input.
+func (d *DensityNet) shown() []int {
+	max := d.MaxPoles
+	if max <= 0 {
+		max = DefaultMaxPoles
+	}
+	n := len(d.Poles)
+	idx := make([]int, min(n, max))
+	step := 1.0
+	if n > max {
+		step = float64(n) / float64(max)
+	}
+	for j := range idx {
+		idx[j] = int(float64(j) * step)
+	}
+	return idx
+}
+
 func (d *DensityNet) levels(hi float64) []float64 {
 	if d.Levels != nil {
 		return d.Levels
 	}
 	var lv []float64
-	for l := 2.0; l < hi; l += 2 {
+	step := levelStep(hi)
+	for l := step; l < hi; l += step {
 		lv = append(lv, l)
 	}
 	return lv
 }
+
+// levelStep is the spacing of the default contours: 2σ, widened past 40σ
+// (many readings counted in a small cone) to keep at most twenty levels.
+func levelStep(hi float64) float64 { return 2 * math.Max(1, math.Ceil(hi/40)) }
 
 // key returns the density net's key.
 func (d *DensityNet) key(hi float64) *keyBox {
@@ -179,8 +214,11 @@ func (d *DensityNet) key(hi float64) *keyBox {
 		notes: []string{
 			fmt.Sprintf("counting cone %.1f° (%.1f%% of the net)", k.Theta, 100*k.Area),
 			fmt.Sprintf("uniform scatter: %.1f poles = 3σ, σ = %.2f", k.Expected, k.Sigma),
-			"contours every 2σ",
+			fmt.Sprintf("contours every %gσ", levelStep(hi)),
 		},
+	}
+	if shown := len(d.shown()); shown < len(d.Poles) {
+		kb.notes = append(kb.notes, fmt.Sprintf("symbols for %d of the %d readings, evenly spread", shown, len(d.Poles)))
 	}
 	in, out := 0, 0
 	for i := range d.Poles {

@@ -140,7 +140,7 @@ func runChances(a *screened, o chanceOptions, stderr io.Writer) (*chances, error
 	if a.Site.Uncertainty == nil {
 		return ch, nil
 	}
-	bar := newProgress(stderr)
+	bar := startProgress(stderr)
 	ch.out, err = study.Run(a.Assessment, ts, study.Options{
 		Realisations: o.realisations, Seed: o.seed, SetSeed: o.seedSet,
 		Field: plots.ChanceNodes(plots.EqualArea, chanceFieldN), FieldDepth: ch.depth, FieldRealisations: chanceFieldRealisations,

@@ -8,6 +8,7 @@ import (
 	"io"
 	"os"
 	"path/filepath"
+	"runtime"
 	"strconv"
 	"strings"
 
@@ -162,24 +163,58 @@ type namedFigure struct {
 }
 
 // figures writes each figure into the folder as SVG and PNG, keeping the
-// SVG bytes for the report.
+// SVG bytes for the report. The figures are drawn concurrently, one
+// goroutine per CPU, and written in order, so that the files and the list
+// of paths are those of drawing them one after the other; on an error the
+// figures before the failing one are written, as they would be then.
 func (o *outputs) figures(figs []*namedFigure) error {
-	for _, f := range figs {
-		var b bytes.Buffer
-		if err := plots.Write(f.fig, f.w, f.h, "svg", &b); err != nil {
-			return fmt.Errorf("%s: %w", f.file, err)
+	formats := []string{"svg", "png"}
+	type drawn struct {
+		b    bytes.Buffer
+		err  error
+		done chan struct{}
+	}
+	out := make([]drawn, len(figs)*len(formats))
+	jobs := make(chan int, len(out))
+	for i := range out {
+		out[i].done = make(chan struct{})
+		jobs <- i
+	}
+	close(jobs)
+	for range min(runtime.GOMAXPROCS(0), len(out)) {
+		go func() {
+			for i := range jobs {
+				f, d := figs[i/len(formats)], &out[i]
+				d.err = plots.Write(f.fig, f.w, f.h, formats[i%len(formats)], &d.b)
+				close(d.done)
+			}
+		}()
+	}
+	defer func() { // let the drawing finish before returning
+		for i := range out {
+			<-out[i].done
 		}
-		f.svg = b.Bytes()
-		p := filepath.Join(o.dir, f.file+".svg")
-		if err := writeFile(p, func(w io.Writer) error { _, err := w.Write(f.svg); return err }); err != nil {
-			return err
+	}()
+	for i, f := range figs {
+		for j, format := range formats {
+			d := &out[i*len(formats)+j]
+			<-d.done
+			p := filepath.Join(o.dir, f.file+"."+format)
+			if d.err != nil {
+				if format == "svg" {
+					return fmt.Errorf("%s: %w", f.file, d.err)
+				}
+				return fmt.Errorf("%s: %w", p, d.err)
+			}
+			data := d.b.Bytes()
+			if format == "svg" {
+				f.svg = data
+			}
+			if err := writeFile(p, func(w io.Writer) error { _, err := w.Write(data); return err }); err != nil {
+				return err
+			}
+			o.wrote = append(o.wrote, p)
 		}
-		o.wrote = append(o.wrote, p)
-		p = filepath.Join(o.dir, f.file+".png")
-		if err := writeFigure(f.fig, f.w, f.h, p); err != nil {
-			return err
-		}
-		o.wrote = append(o.wrote, p)
 	}
 	return nil
 }

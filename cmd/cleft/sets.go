@@ -5,6 +5,7 @@ import (
 	"io"
 	"math"
 	"path/filepath"
+	"runtime/debug"
 	"sort"
 	"strings"
 
@@ -61,7 +62,7 @@ tensor. With --out: sets.csv, readings.csv and a pole-density stereonet
 		},
 		RunE: func(cmd *cobra.Command, args []string) error {
 			o.readings = args[0]
-			return runSets(o, cmd.InOrStdin(), cmd.OutOrStdout())
+			return runSets(o, cmd.InOrStdin(), cmd.OutOrStdout(), cmd.ErrOrStderr())
 		},
 	}
 	f := c.Flags()
@@ -157,7 +158,14 @@ func printSets(b *strings.Builder, g *sets.Grouping) {
 	fmt.Fprintf(b, "%-11s %6d %9.1f\n", "unassigned", an.Unassigned, an.UnassignedWeight)
 }
 
-func runSets(o setsOptions, stdin io.Reader, stdout io.Writer) error {
+// setsMemoryLimit is the soft memory limit of cleft sets, unless GOMEMLIMIT
+// sets one. A million readings hold about 370 MB while the reader grows its
+// table and 270 MB while they are grouped; without a limit the collector
+// lets the heap grow to twice that (peak RSS 630–850 MB measured), with it
+// the peak stays near 400 MB for about 20 % more CPU time.
+const setsMemoryLimit = 300 << 20
+
+func runSets(o setsOptions, stdin io.Reader, stdout, stderr io.Writer) error {
 	cfg, err := o.config()
 	if err != nil {
 		return err
@@ -171,12 +179,25 @@ func runSets(o setsOptions, stdin io.Reader, stdout io.Writer) error {
 			return err
 		}
 	}
+	if old := debug.SetMemoryLimit(-1); old == math.MaxInt64 {
+		debug.SetMemoryLimit(setsMemoryLimit)
+		defer debug.SetMemoryLimit(old)
+	}
+	bar := startProgress(stderr)
+	defer bar.finish()
 	readings, extras, _, err := site.LoadReadings(o.readings, stdin)
 	if err != nil {
 		return err
 	}
 	if len(cfg.Seeds) > len(readings) || cfg.Count > len(readings) {
 		return fmt.Errorf("%s: %d readings cannot make %d sets", o.readings, len(readings), max(cfg.Count, len(cfg.Seeds)))
+	}
+	// Steps of the bar: each k-means run of the grouping, the tables, the
+	// density stereonet.
+	steps := 0
+	cfg.Progress = func(done, total int) {
+		steps = total + 2
+		bar.set("grouping", done, steps)
 	}
 	g := assess.Group(readings, cfg)
 	var b strings.Builder
@@ -185,10 +206,12 @@ func runSets(o setsOptions, stdin io.Reader, stdout io.Writer) error {
 		if err := makeDir(o.out); err != nil {
 			return err
 		}
+		bar.set("writing tables", steps-2, steps)
 		out := &outputs{dir: o.out}
-		if err := out.tables(csvTable("sets.csv", table.Sets(g)), csvTable("readings.csv", table.Readings(g, readings, extras))); err != nil {
+		if err := out.tables(csvTable("sets.csv", table.Sets(g)), namedTable{"readings.csv", func(w io.Writer) error { return table.WriteReadings(w, g, readings, extras) }}); err != nil {
 			return err
 		}
+		bar.set("drawing the density stereonet", steps-1, steps)
 		if err := out.figures([]*namedFigure{densityFigure(g, filepath.Base(o.readings), proj)}); err != nil {
 			return err
 		}
@@ -196,6 +219,7 @@ func runSets(o setsOptions, stdin io.Reader, stdout io.Writer) error {
 		sort.Strings(names)
 		fmt.Fprintf(&b, "\nWrote %s to %s.\n", strings.Join(names, ", "), o.out)
 	}
+	bar.finish()
 	_, err = io.WriteString(stdout, b.String())
 	return err
 }

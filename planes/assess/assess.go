@@ -10,6 +10,8 @@ import (
 	"cleft/planes"
 	"cleft/planes/sets"
 	"cleft/planes/site"
+
+	"gonum.org/v1/gonum/spatial/r3"
 )
 
 // Input is an input file of the assessment with its SHA-256 (hex).
@@ -245,10 +247,10 @@ func (a *Assessment) mergeColumns(readings []site.Plane, extras []string) {
 // Group groups readings into sets by c (sets.Group), with each reading's own
 // weight.
 func Group(readings []site.Plane, c sets.Config) *sets.Grouping {
-	os := make([]planes.Orientation, len(readings))
+	poles := make([]r3.Vec, len(readings))
 	own := make([]float64, len(readings))
-	for i, r := range readings {
-		os[i], own[i] = r.Orientation, r.Weight
+	for i := range readings {
+		poles[i], own[i] = readings[i].Orientation.Normal(), readings[i].Weight
 	}
-	return sets.Group(os, own, c)
+	return sets.GroupPoles(poles, own, c)
 }

@@ -1,9 +1,11 @@
 package sets
 
 import (
+	"math"
+	"sync"
+
 	"cleft/insitu/geom"
 	"cleft/planes"
-	"math"
 
 	"gonum.org/v1/gonum/spatial/r3"
 )
@@ -14,6 +16,11 @@ type Options struct {
 	Seeds    []r3.Vec // starting set axes (poles); fixes the number of sets
 	MaxAngle float64  // cut-off cone, degrees; 0 for none
 	KMax     int      // largest number tried by the automatic choice (default 6)
+	// Progress, when not nil, is called after each k-means run with the
+	// number of runs done and the number the grouping will make (ten for
+	// each number of sets tried and ten for the grouping kept; one with
+	// Seeds), one call at a time, from any goroutine.
+	Progress func(done, total int)
 }
 
 // Set is one joint set with its statistics.
@@ -39,9 +46,12 @@ type Analysis struct {
 	Unassigned       int
 	UnassignedWeight float64
 	// Auto is true when the number of sets was chosen by ChooseK; Scores
-	// then holds the mean silhouette width for each number tried.
-	Auto   bool
-	Scores []float64
+	// then holds the mean silhouette width for each number tried, and
+	// ChosenOn the number of readings the choice grouped (all of them, or
+	// ChooseSample spread evenly through them).
+	Auto     bool
+	Scores   []float64
+	ChosenOn int
 }
 
 // Analyse groups the poles into sets (Cluster, with ChooseK when
@@ -51,21 +61,27 @@ type Analysis struct {
 func Analyse(poles []r3.Vec, weights []float64, o Options) Analysis {
 	var a Analysis
 	co := ClusterOptions{K: o.K, Seeds: o.Seeds, MaxAngle: o.MaxAngle, Weights: weights}
-	if o.K == 0 && len(o.Seeds) == 0 {
-		kmax := o.KMax
-		if kmax == 0 {
-			kmax = 6
-		}
+	kmax := o.KMax
+	if kmax == 0 {
+		kmax = 6
+	}
+	auto := o.K == 0 && len(o.Seeds) == 0
+	done := progress(o.Progress, auto, len(o.Seeds) > 0, min(kmax, min(len(poles), ChooseSample)-1))
+	co.Progress = done
+	if auto {
 		// The number of sets is chosen without the cut-off cone: a cone
 		// leaves out the readings that do not fit, which flatters a
 		// grouping with too few sets.
 		choose := co
 		choose.MaxAngle = 0
 		co.K, a.Scores = ChooseK(poles, choose, kmax)
-		a.Auto = true
+		a.Auto, a.ChosenOn = true, min(len(poles), ChooseSample)
 	}
 	co.K = min(max(co.K, 1), len(poles))
 	c := Cluster(poles, co)
+	if len(o.Seeds) > 0 && done != nil {
+		done()
+	}
 	a.Assign = c.Assign
 	w := func(i int) float64 {
 		if weights == nil {
@@ -128,4 +144,28 @@ func Analyse(poles []r3.Vec, weights []float64, o Options) Analysis {
 		}
 	}
 	return a
+}
+
+// progress counts the k-means runs of Analyse for report (nil for none):
+// ten for each number of sets from 2 to kmax when auto, then ten, or one
+// with seeds. It returns the function to call after each run.
+func progress(report func(done, total int), auto, seeded bool, kmax int) func() {
+	if report == nil {
+		return nil
+	}
+	total := 10
+	if seeded {
+		total = 1
+	}
+	if auto {
+		total += 10 * max(0, kmax-1)
+	}
+	var mu sync.Mutex
+	done := 0
+	return func() {
+		mu.Lock()
+		defer mu.Unlock()
+		done++
+		report(done, total)
+	}
 }

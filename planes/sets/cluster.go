@@ -3,7 +3,9 @@ package sets
 import (
 	"math"
 	"math/rand/v2"
+	"runtime"
 	"sort"
+	"sync"
 
 	"gonum.org/v1/gonum/spatial/r3"
 )
@@ -19,6 +21,9 @@ type ClusterOptions struct {
 	MaxAngle float64
 	// Weights of the readings (nil for none).
 	Weights []float64
+	// Progress, when not nil, is called after each of the ten k-means
+	// runs of an automatic start (none with Seeds), from any goroutine.
+	Progress func()
 }
 
 // Clustering is readings grouped into sets.
@@ -66,30 +71,61 @@ func Cluster(normals []r3.Vec, o ClusterOptions) Clustering {
 		c, _ := refine(unit, axes, o)
 		return order(c, o.Weights)
 	}
+	// The starts are drawn one after the other from the one generator, so
+	// that they do not depend on how the refinements are scheduled; the
+	// refinements run in parallel, and the least misfit wins, the earlier
+	// start on a tie.
 	rng := rand.New(rand.NewPCG(0x5e7, 0xc1e))
-	var best Clustering
-	bestCost := math.Inf(1)
-	for range 10 {
-		c, cost := refine(unit, seedPlusPlus(unit, k, rng), o)
-		if cost < bestCost {
-			best, bestCost = c, cost
-		}
+	starts := make([][]r3.Vec, 10)
+	for r := range starts {
+		starts[r] = seedPlusPlus(unit, k, rng)
 	}
+	var (
+		mu       sync.Mutex
+		best     Clustering
+		bestCost = math.Inf(1)
+		bestAt   = len(starts)
+		wg       sync.WaitGroup
+	)
+	next := make(chan int, len(starts))
+	for r := range starts {
+		next <- r
+	}
+	close(next)
+	for range min(runtime.GOMAXPROCS(0), len(starts)) {
+		wg.Go(func() {
+			for r := range next {
+				c, cost := refine(unit, starts[r], o)
+				mu.Lock()
+				if cost < bestCost || (cost == bestCost && r < bestAt) {
+					best, bestCost, bestAt = c, cost, r
+				}
+				mu.Unlock()
+				if o.Progress != nil {
+					o.Progress()
+				}
+			}
+		})
+	}
+	wg.Wait()
 	return order(best, o.Weights)
 }
 
 // seedPlusPlus draws k starting axes, each new one with probability
-// proportional to its misfit from the nearest already drawn.
+// proportional to its misfit from the nearest already drawn. The misfit of
+// each reading is kept from one draw to the next (the minimum over the axes
+// drawn so far), so that a draw costs one pass over the readings.
 func seedPlusPlus(unit []r3.Vec, k int, rng *rand.Rand) []r3.Vec {
 	axes := []r3.Vec{unit[rng.IntN(len(unit))]}
 	d := make([]float64, len(unit))
+	for i := range d {
+		d[i] = math.Inf(1)
+	}
 	for len(axes) < k {
+		a := axes[len(axes)-1]
 		total := 0.0
 		for i, u := range unit {
-			d[i] = math.Inf(1)
-			for _, a := range axes {
-				d[i] = math.Min(d[i], axialDist(u, a))
-			}
+			d[i] = math.Min(d[i], axialDist(u, a))
 			total += d[i]
 		}
 		if total == 0 { // all readings on the chosen axes
@@ -125,10 +161,14 @@ func refine(unit []r3.Vec, axes []r3.Vec, o ClusterOptions) (Clustering, float64
 		}
 		return o.Weights[i]
 	}
+	// Each set's orientation tensor is summed while the readings are
+	// assigned, in input order, so no member lists are built.
+	sums := make([]tensorSum, len(axes))
 	cost := 0.0
 	for range 100 {
 		changed := false
 		cost = 0
+		clear(sums)
 		for i, u := range unit {
 			best, bd := -1, -1.0
 			for j, a := range axes {
@@ -140,29 +180,25 @@ func refine(unit []r3.Vec, axes []r3.Vec, o ClusterOptions) (Clustering, float64
 				best = -1
 				bd = cut // an unassigned reading costs as much as one on the cone
 			}
-			cost += w(i) * (1 - bd*bd)
+			wi := w(i)
+			cost += wi * (1 - bd*bd)
 			if best != assign[i] {
 				assign[i] = best
 				changed = true
+			}
+			if best >= 0 {
+				sums[best].add(u, wi)
 			}
 		}
 		if !changed {
 			break
 		}
 		for j := range axes {
-			var members []r3.Vec
-			var ws []float64
-			for i, u := range unit {
-				if assign[i] == j {
-					members = append(members, u)
-					ws = append(ws, w(i))
-				}
-			}
-			if len(members) == 0 {
+			if sums[j].n == 0 {
 				axes[j] = worstFit(unit, axes, assign)
 				continue
 			}
-			axes[j] = OrientationTensor(members, ws).Axes[0]
+			axes[j] = sums[j].eigen().Axes[0]
 		}
 	}
 	return Clustering{Assign: assign, Axes: axes}, cost
@@ -217,87 +253,4 @@ func order(c Clustering, weights []float64) Clustering {
 	}
 	c.Axes = axes
 	return c
-}
-
-// Silhouette returns the mean silhouette width (Rousseeuw 1987) of a
-// clustering, with the axial angle in degrees as the distance: for each
-// assigned reading, s = (b − a)/max(a, b), a its mean angle to the other
-// members of its set, b the least mean angle to the members of another set.
-// Readings in sets of one count 0. Unassigned readings are left out. At most
-// limit readings (spread evenly through the input) are used, since the cost
-// grows with the square of their number. NaN for fewer than two sets.
-func Silhouette(normals []r3.Vec, c Clustering, limit int) float64 {
-	if len(c.Axes) < 2 {
-		return math.NaN()
-	}
-	var idx []int
-	for i, a := range c.Assign {
-		if a >= 0 {
-			idx = append(idx, i)
-		}
-	}
-	if limit > 0 && len(idx) > limit {
-		step := float64(len(idx)) / float64(limit)
-		sub := make([]int, limit)
-		for i := range sub {
-			sub[i] = idx[int(float64(i)*step)]
-		}
-		idx = sub
-	}
-	k := len(c.Axes)
-	sum := 0.0
-	sums := make([]float64, k)
-	counts := make([]int, k)
-	for _, i := range idx {
-		counts[c.Assign[i]]++
-	}
-	for _, i := range idx {
-		for j := range sums {
-			sums[j] = 0
-		}
-		u := r3.Unit(normals[i])
-		for _, m := range idx {
-			if m == i {
-				continue
-			}
-			d := math.Acos(math.Min(1, math.Abs(r3.Dot(u, r3.Unit(normals[m])))))
-			sums[c.Assign[m]] += d
-		}
-		own := c.Assign[i]
-		if counts[own] < 2 {
-			continue
-		}
-		a := sums[own] / float64(counts[own]-1)
-		b := math.Inf(1)
-		for j := range sums {
-			if j != own && counts[j] > 0 {
-				b = math.Min(b, sums[j]/float64(counts[j]))
-			}
-		}
-		if m := math.Max(a, b); m > 0 && !math.IsInf(b, 1) {
-			sum += (b - a) / m
-		}
-	}
-	return sum / float64(len(idx))
-}
-
-// ChooseK picks the number of sets for automatic clustering: it clusters
-// with K = 2 … kmax and keeps the K of the largest mean silhouette width
-// (Rousseeuw 1987). When no K reaches 0.25, which Kaufman & Rousseeuw (1990)
-// read as no substantial structure, it returns 1. scores[K] holds each
-// width (scores[0] and scores[1] are NaN).
-func ChooseK(normals []r3.Vec, o ClusterOptions, kmax int) (k int, scores []float64) {
-	kmax = min(kmax, len(normals)-1)
-	scores = []float64{math.NaN(), math.NaN()}
-	k, best := 1, 0.25
-	for kk := 2; kk <= kmax; kk++ {
-		oo := o
-		oo.K, oo.Seeds = kk, nil
-		s := Silhouette(normals, Cluster(normals, oo), 2000)
-		scores = append(scores, s)
-		if s > best {
-			k, best = kk, s
-		}
-	}
-	return k, scores
 }

@@ -17,6 +17,9 @@ type Config struct {
 	MaxAngle  float64              // cut-off cone about each set axis, degrees; 0 for none
 	Line      *geom.Line           // sampling line for Terzaghi weights, or nil
 	MaxWeight float64              // cap of the Terzaghi weight, ≥ 1
+	// Progress, when not nil, follows the grouping (Options.Progress); it
+	// is no part of the site file.
+	Progress func(done, total int)
 }
 
 // DefaultConfig is automatic choice, no cut-off, no sampling line.
@@ -62,15 +65,23 @@ func Weights(poles []r3.Vec, own []float64, line *geom.Line, max float64) []floa
 // Group weights the readings (Weights) and groups them into sets (Analyse).
 // own may be nil.
 func Group(readings []planes.Orientation, own []float64, c Config) *Grouping {
-	g := &Grouping{Config: c, Poles: make([]r3.Vec, len(readings))}
+	poles := make([]r3.Vec, len(readings))
 	for i, r := range readings {
-		g.Poles[i] = r.Normal()
+		poles[i] = r.Normal()
 	}
+	return GroupPoles(poles, own, c)
+}
+
+// GroupPoles is Group for readings given by their unit poles, which the
+// Grouping keeps (as Poles): for many readings it saves building their
+// orientations. own may be nil.
+func GroupPoles(poles []r3.Vec, own []float64, c Config) *Grouping {
+	g := &Grouping{Config: c, Poles: poles}
 	g.Weights = Weights(g.Poles, own, c.Line, c.MaxWeight)
 	for _, w := range own {
 		g.Own = g.Own || !math.IsNaN(w)
 	}
-	o := Options{K: c.Count, MaxAngle: c.MaxAngle}
+	o := Options{K: c.Count, MaxAngle: c.MaxAngle, Progress: c.Progress}
 	for _, s := range c.Seeds {
 		o.Seeds = append(o.Seeds, s.Normal())
 	}

@@ -29,28 +29,47 @@ func OrientationTensor(normals []r3.Vec, weights []float64) Eigen {
 	if weights != nil && len(weights) != len(normals) {
 		panic("planes: OrientationTensor with different numbers of normals and weights")
 	}
-	var t [6]float64 // xx yy zz xy xz yz
-	sw := 0.0
+	var s tensorSum
 	for i, n := range normals {
 		w := 1.0
 		if weights != nil {
 			w = weights[i]
 		}
-		n = r3.Unit(n)
-		t[0] += w * n.X * n.X
-		t[1] += w * n.Y * n.Y
-		t[2] += w * n.Z * n.Z
-		t[3] += w * n.X * n.Y
-		t[4] += w * n.X * n.Z
-		t[5] += w * n.Y * n.Z
-		sw += w
+		s.add(r3.Unit(n), w)
 	}
-	if sw == 0 {
+	return s.eigen()
+}
+
+// tensorSum accumulates Σ wᵢ nᵢnᵢᵀ (xx yy zz xy xz yz), Σ wᵢ and the number
+// of axes added, for OrientationTensor and for the clustering, which keeps
+// one per set while it assigns the readings.
+type tensorSum struct {
+	t [6]float64
+	w float64
+	n int
+}
+
+// add adds the axis n (unit) with weight w.
+func (s *tensorSum) add(n r3.Vec, w float64) {
+	s.t[0] += w * n.X * n.X
+	s.t[1] += w * n.Y * n.Y
+	s.t[2] += w * n.Z * n.Z
+	s.t[3] += w * n.X * n.Y
+	s.t[4] += w * n.X * n.Z
+	s.t[5] += w * n.Y * n.Z
+	s.w += w
+	s.n++
+}
+
+// eigen normalises the sum by Σ w and decomposes it; NaN values when Σ w = 0.
+func (s *tensorSum) eigen() Eigen {
+	if s.w == 0 {
 		nan := math.NaN()
 		return Eigen{Values: [3]float64{nan, nan, nan}}
 	}
+	var t [6]float64
 	for i := range t {
-		t[i] /= sw
+		t[i] = s.t[i] / s.w
 	}
 	v, a, ok := geom.EigenDescending(geom.Sym3{XX: t[0], YY: t[1], ZZ: t[2], XY: t[3], XZ: t[4], YZ: t[5]})
 	if !ok {

@@ -1,7 +1,9 @@
 package table
 
 import (
+	"encoding/csv"
 	"fmt"
+	"io"
 
 	"cleft/planes/assess"
 	"cleft/planes/sets"
@@ -57,6 +59,32 @@ func AssessedSets(a *assess.Assessment) [][]string {
 // its angle to its set's mean pole, then the input's other columns (its own
 // set column as field_set, any other name already taken with InputPrefix).
 func Readings(g *sets.Grouping, readings []site.Plane, extras []string) [][]string {
+	rows := [][]string{readingsHeader(extras)}
+	for i := range readings {
+		rows = append(rows, readingRow(nil, g, readings, i))
+	}
+	return rows
+}
+
+// WriteReadings writes Readings as CSV row by row, without holding the
+// whole table: the same bytes as WriteCSV(w, Readings(…)).
+func WriteReadings(w io.Writer, g *sets.Grouping, readings []site.Plane, extras []string) error {
+	cw := csv.NewWriter(w)
+	if err := cw.Write(readingsHeader(extras)); err != nil {
+		return err
+	}
+	var row []string
+	for i := range readings {
+		row = readingRow(row[:0], g, readings, i)
+		if err := cw.Write(row); err != nil {
+			return err
+		}
+	}
+	cw.Flush()
+	return cw.Error()
+}
+
+func readingsHeader(extras []string) []string {
 	head := []string{"name", "dip", "dip_direction", "depth_m", "weight", "set", "angle_to_mean_deg"}
 	own := make([]string, len(extras))
 	for i, e := range extras {
@@ -65,11 +93,12 @@ func Readings(g *sets.Grouping, readings []site.Plane, extras []string) [][]stri
 		}
 		own[i] = e
 	}
-	head = append(head, Carried(head, own)...)
-	rows := [][]string{head}
-	for i, r := range readings {
-		row := []string{r.Name, Cell(r.Orientation.Dip()), Cell(r.Orientation.DipDirection()), Cell(r.Depth), Cell(g.Weight(i)), g.Assigned(i), Cell(g.Analysis.AngleToMean[i])}
-		rows = append(rows, append(row, r.Extras...))
-	}
-	return rows
+	return append(head, Carried(head, own)...)
+}
+
+// readingRow appends the cells of reading i to row.
+func readingRow(row []string, g *sets.Grouping, readings []site.Plane, i int) []string {
+	r := &readings[i]
+	row = append(row, r.Name, Cell(r.Orientation.Dip()), Cell(r.Orientation.DipDirection()), Cell(r.Depth), Cell(g.Weight(i)), g.Assigned(i), Cell(g.Analysis.AngleToMean[i]))
+	return append(row, r.Extras...)
 }

@@ -24,7 +24,11 @@ func Grouping(g *sets.Grouping) string {
 		for k := 2; k < len(an.Scores); k++ {
 			sc = append(sc, fmt.Sprintf("%d: %.2f", k, an.Scores[k]))
 		}
-		fmt.Fprintf(&b, "The number of sets was chosen by the mean silhouette width (Rousseeuw 1987; axial angle as the distance) of k-means groupings with 2 to %d sets — %s — ", len(an.Scores)-1, strings.Join(sc, ", "))
+		of := ""
+		if an.ChosenOn < len(g.Poles) {
+			of = fmt.Sprintf(" of %d of the readings, spread evenly through them,", an.ChosenOn)
+		}
+		fmt.Fprintf(&b, "The number of sets was chosen by the mean silhouette width (Rousseeuw 1987; axial angle as the distance) of k-means groupings%s with 2 to %d sets — %s — ", of, len(an.Scores)-1, strings.Join(sc, ", "))
 		if n == 1 {
 			b.WriteString("none reaching 0.25, read as no substantial structure (Kaufman & Rousseeuw 1990): one set.")
 		} else {
