@@ -47,6 +47,9 @@ type DensityNet struct {
 	// resolution to match the figure).
 	Field *Field
 	Kamb  sets.Kamb
+	// Smooth, when set, says that Field holds the exponential Kamb
+	// weighting of NewSmoothField (and Kamb is not used).
+	Smooth *sets.Smoothing
 }
 
 // NewDensityField evaluates the Kamb density of the poles at every node of
@@ -102,6 +105,60 @@ func NewDensityField(p Projection, poles []r3.Vec, weights []float64, n int) (*F
 		}
 	}
 	return f, k
+}
+
+// NewSmoothField evaluates the smoothed pole density of the poles
+// (sets.Smoothing, the exponential Kamb weighting of Vollmer 1995) at every
+// node of an n × n net grid, in parallel over rows, as NewDensityField
+// counts: weights scaled to sum to the number of readings, nodes outside
+// the primitive given the value of the primitive point on their radius.
+func NewSmoothField(p Projection, poles []r3.Vec, weights []float64, n int) (*Field, sets.Smoothing) {
+	total := float64(len(poles))
+	if weights != nil {
+		sw := 0.0
+		for _, w := range weights {
+			sw += w
+		}
+		scaled := make([]float64, len(weights))
+		for i, w := range weights {
+			scaled[i] = w * total / sw
+		}
+		weights = scaled
+	}
+	sm := sets.NewSmoothing(total)
+	sc := sets.NewSmoothCounter(sm, poles, weights)
+	f := &Field{N: n, Values: make([]float64, n*n)}
+	rows := make(chan int, n)
+	for j := range n {
+		rows <- j
+	}
+	close(rows)
+	var wg sync.WaitGroup
+	for range runtime.GOMAXPROCS(0) {
+		wg.Go(func() {
+			for j := range rows {
+				for i := range n {
+					pt := f.Node(i, j)
+					if r := math.Hypot(pt.X, pt.Y); r > 1 {
+						pt.X, pt.Y = pt.X/r, pt.Y/r
+					}
+					l, _ := p.Inverse(pt)
+					f.Values[j*n+i] = sc.Density(l.Vec())
+				}
+			}
+		})
+	}
+	wg.Wait()
+	f.Min, f.Max = math.Inf(1), math.Inf(-1)
+	for j := range n {
+		for i := range n {
+			if f.Inside(i, j) {
+				v := f.Values[j*n+i]
+				f.Min, f.Max = math.Min(f.Min, v), math.Max(f.Max, v)
+			}
+		}
+	}
+	return f, sm
 }
 
 // Draw draws the figure on c, laid out like the tendency stereonet: text
@@ -216,6 +273,14 @@ func (d *DensityNet) key(hi float64) *keyBox {
 			fmt.Sprintf("uniform scatter: %.1f poles = 3σ, σ = %.2f", k.Expected, k.Sigma),
 			fmt.Sprintf("contours every %gσ", levelStep(hi)),
 		},
+	}
+	if sm := d.Smooth; sm != nil {
+		kb.head = "pole density, smoothed (Vollmer 1995)"
+		kb.notes = []string{
+			fmt.Sprintf("exponential Kamb weighting, K = %.3g", sm.K),
+			fmt.Sprintf("uniform scatter reads %.1fσ", sm.Expected/sm.Sigma),
+			fmt.Sprintf("contours every %gσ", levelStep(hi)),
+		}
 	}
 	if shown := len(d.shown()); shown < len(d.Poles) {
 		kb.notes = append(kb.notes, fmt.Sprintf("symbols for %d of the %d readings, evenly spread", shown, len(d.Poles)))

@@ -103,3 +103,32 @@ func BenchmarkDensityField(b *testing.B) {
 		}
 	})
 }
+
+// TestSmoothFieldIsTheSum checks every node of the smoothed density field
+// against sets.Smoothing.Density, the plain sum over every pole, at the
+// node's axis (only weights below 1e-12 are left out by the cells).
+func TestSmoothFieldIsTheSum(t *testing.T) {
+	poles, weights := densityPoles(3000, 83)
+	f, s := NewSmoothField(EqualArea, poles, weights, 61)
+	sw := 0.0
+	for _, x := range weights {
+		sw += x
+	}
+	scaled := make([]float64, len(weights))
+	for i, x := range weights {
+		scaled[i] = x * float64(len(weights)) / sw
+	}
+	tol := 1e-9 * float64(len(poles)) / s.Sigma
+	for j := range f.N {
+		for i := range f.N {
+			pt := f.Node(i, j)
+			if r := math.Hypot(pt.X, pt.Y); r > 1 {
+				pt.X, pt.Y = pt.X/r, pt.Y/r
+			}
+			l, _ := EqualArea.Inverse(pt)
+			if got, want := f.Values[j*f.N+i], s.Density(l.Vec(), poles, scaled); math.Abs(got-want) > tol {
+				t.Fatalf("node %d, %d: %v, want %v", i, j, got, want)
+			}
+		}
+	}
+}

@@ -51,7 +51,8 @@ raw ones.
 Per set: count, weighted count, mean plane (Fisher 1953 mean pole), Fisher K,
 α95, spherical variance, and Woodcock's (1977) K and C of the orientation
 tensor. With --out: sets.csv, readings.csv and a pole-density stereonet
-(Kamb 1959 counting, contours in multiples of σ) as sets-density.svg/.png.
+(the exponential Kamb weighting of Vollmer 1995, contours in multiples of σ)
+as sets-density.svg/.png.
 
 ` + caution,
 		Args: func(_ *cobra.Command, args []string) error {
@@ -123,7 +124,9 @@ func densityNet(g *sets.Grouping, site string, proj plots.Projection, w, h float
 		Poles:   g.Poles,
 		Weights: g.Weights,
 	}
-	d.Field, d.Kamb = plots.NewDensityField(proj, g.Poles, g.Weights, plots.FieldSize(cm(w, 0), cm(h, 0)))
+	var sm sets.Smoothing
+	d.Field, sm = plots.NewSmoothField(proj, g.Poles, g.Weights, plots.FieldSize(cm(w, 0), cm(h, 0)))
+	d.Smooth = &sm
 	if g.Weights != nil {
 		d.Lines[0] += ", weighted"
 	}
@@ -140,7 +143,7 @@ func densityNet(g *sets.Grouping, site string, proj plots.Projection, w, h float
 func densityFigure(g *sets.Grouping, site string, proj plots.Projection) *namedFigure {
 	return &namedFigure{file: "sets-density",
 		title:   fmt.Sprintf("Pole density of the %d field readings and their %d sets", len(g.Poles), len(g.Analysis.Sets)),
-		caption: "Kamb (1959) counting of the poles (weighted where the readings are), in multiples of σ: a uniform scatter reads 3σ. Dots are poles of readings in a set, rings unassigned readings; each set mean is shown with its 95 % confidence cone (α95, Fisher 1953). " + words.Grouping(g),
+		caption: "Pole density by the exponential Kamb weighting of Vollmer (1995) — each pole counts for exp(K(|cos θ| − 1)) at angle θ, a smooth form of Kamb's (1959) counting cone — weighted where the readings are, in multiples of σ: a uniform scatter reads about 3σ. Dots are poles of readings in a set, rings unassigned readings; each set mean is shown with its 95 % confidence cone (α95, Fisher 1953). " + words.Grouping(g),
 		fig:     densityNet(g, site, proj, 19, 13.5), w: cm(19, 0), h: cm(13.5, 0)}
 }
 

@@ -152,3 +152,36 @@ func (c *KambCounter) search(lo, hi [3]int, test func(r3.Vec, int32)) {
 		}
 	}
 }
+
+// sum returns Σ wᵢ·f(|axis·nᵢ|) over the readings within the cone (weights
+// 1 when none), for weightings that vanish outside it.
+func (c *KambCounter) sum(axis r3.Vec, f func(float64) float64) float64 {
+	axis = r3.Unit(axis)
+	total := 0.0
+	add := func(p r3.Vec, i int32) {
+		if d := math.Abs(r3.Dot(axis, p)); d >= c.k.cos {
+			w := f(d)
+			if c.weights != nil {
+				w *= c.weights[i]
+			}
+			total += w
+		}
+	}
+	if !math.IsNaN(axis.X + axis.Y + axis.Z) {
+		lo, hi := c.box(axis)
+		alo, ahi := c.box(r3.Scale(-1, axis))
+		if lo[0] <= ahi[0] && alo[0] <= hi[0] && lo[1] <= ahi[1] && alo[1] <= hi[1] && lo[2] <= ahi[2] && alo[2] <= hi[2] {
+			for d := range 3 {
+				lo[d], hi[d] = min(lo[d], alo[d]), max(hi[d], ahi[d])
+			}
+			c.search(lo, hi, add)
+		} else {
+			c.search(lo, hi, add)
+			c.search(alo, ahi, add)
+		}
+	}
+	for j, i := range c.rest {
+		add(c.restPts[j], i)
+	}
+	return total
+}
