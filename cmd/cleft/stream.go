@@ -21,17 +21,18 @@ const (
 
 // batch is a run of planes on their way through the pipeline.
 type batch struct {
-	planes []site.Plane
+	rows   []site.Row   // as read
+	planes []site.Plane // as parsed by a worker
 	n      int
 	first  bool  // holds the first row of the table
-	err    error // the reading error that ended the input after these rows
+	err    error // the error that ended the input after the first n rows
 	out    []byte
 	done   chan struct{}
 }
 
 // streamTable reads every plane of ps, resolves it and writes its row to w
-// in input order. Reading runs in one goroutine, resolving and formatting in
-// one per CPU, writing in the caller's; at most 2·workers + 1 batches are in
+// in input order. Reading runs in one goroutine, parsing, resolving and
+// formatting in one per CPU, writing in the caller's; at most 2·workers + 1 batches are in
 // flight, so memory stays flat however long the input. On a bad row the rows
 // before it are written and its error returned.
 func streamTable(s *site.Site, ps *site.PlaneStream, f table.Format, w io.Writer) (int, error) {
@@ -40,7 +41,7 @@ func streamTable(s *site.Site, ps *site.PlaneStream, f table.Format, w io.Writer
 	inflight := 2*workers + 1
 	free := make(chan *batch, inflight)
 	for range inflight {
-		free <- &batch{planes: make([]site.Plane, batchSize)}
+		free <- &batch{rows: make([]site.Row, batchSize), planes: make([]site.Plane, batchSize)}
 	}
 	work := make(chan *batch, inflight)
 	order := make(chan *batch, inflight)
@@ -62,8 +63,8 @@ func streamTable(s *site.Site, ps *site.PlaneStream, f table.Format, w io.Writer
 			first = false
 			size, end := 0, false
 			for b.n < batchSize && size < batchBytes {
-				p := &b.planes[b.n]
-				if err := ps.Next(p); err != nil {
+				r := &b.rows[b.n]
+				if err := ps.NextRow(r); err != nil {
 					if !errors.Is(err, io.EOF) {
 						b.err = err
 					}
@@ -71,10 +72,7 @@ func streamTable(s *site.Site, ps *site.PlaneStream, f table.Format, w io.Writer
 					break
 				}
 				b.n++
-				size += len(p.Name)
-				for _, e := range p.Extras {
-					size += len(e)
-				}
+				size += r.Size()
 			}
 			order <- b
 			work <- b
@@ -94,6 +92,10 @@ func streamTable(s *site.Site, ps *site.PlaneStream, f table.Format, w io.Writer
 			for b := range work {
 				for i := range b.n {
 					p := &b.planes[i]
+					if err := ps.Parse(&b.rows[i], p); err != nil {
+						b.n, b.err = i, err // the rows before it are written
+						break
+					}
 					rv.Resolve(p, &r)
 					b.out = table.AppendRow(b.out, f, p, &r, names, b.first && i == 0)
 				}

@@ -32,8 +32,8 @@ type PlaneReader struct {
 	ExtraNames []string
 	width      int // number of header columns
 	defaults   planeDefaults
-	vals       [nCols]string
 	present    [nCols]bool
+	row        Row // Next's row, reused
 }
 
 // NewPlaneReader reads the header of the table in r; file names it in errors.
@@ -121,49 +121,10 @@ func NewPlaneReader(r io.Reader, file string, d planeDefaults) (*PlaneReader, er
 // Next reads the next plane into p. It returns io.EOF after the last row.
 // p.Extras is reused between calls when it has the capacity.
 func (pr *PlaneReader) Next(p *Plane) error {
-	rec, err := pr.r.Read()
-	if err != nil {
-		if errors.Is(err, io.EOF) {
-			return io.EOF
-		}
-		return pr.g.csvError(err)
-	}
-	line, _ := pr.r.FieldPos(0)
-	if len(rec) != pr.width {
-		return &Error{File: pr.file, Line: line, Err: ErrSyntax, Msg: fmt.Sprintf("this row has %d values and the header %d columns: every row needs one value per column (quote values that contain commas)", len(rec), pr.width)}
-	}
-	for c, i := range pr.idx {
-		if i >= 0 {
-			pr.vals[c] = rec[i]
-		}
-	}
-	errAt := func(col int, kind error, format string, a ...any) error {
-		return &Error{File: pr.file, Line: line, Column: pr.idx[col] + 1, Key: fmt.Sprintf("%s (column %d)", colNames[col], pr.idx[col]+1), Err: kind, Msg: fmt.Sprintf(format, a...)}
-	}
-	if i := pr.idx[colName]; i >= 0 {
-		if j := badText(rec[i], false); j >= 0 {
-			return errAt(colName, ErrEncoding, "%s", textProblem(rec[i], j))
-		}
-	}
-	extras := p.Extras[:0]
-	for k, i := range pr.extra {
-		if j := badText(rec[i], true); j >= 0 {
-			l, _ := pr.r.FieldPos(i)
-			return &Error{File: pr.file, Line: l, Column: i + 1, Key: fmt.Sprintf("%s (column %d)", pr.ExtraNames[k], i+1), Err: ErrEncoding, Msg: textProblem(rec[i], j)}
-		}
-		extras = append(extras, rec[i])
-	}
-	q, err := parsePlane(&pr.vals, &pr.present, pr.defaults, errAt)
-	if err != nil {
+	if err := pr.readRow(&pr.row); err != nil {
 		return err
 	}
-	*p = q
-	p.Line = line
-	p.Extras = extras
-	if p.Name == "" {
-		p.Name = fmt.Sprintf("R%d", line)
-	}
-	return nil
+	return pr.parseRow(&pr.row, p)
 }
 
 // PlaneStream yields a site's planes: the inline planes, then those of
@@ -181,6 +142,7 @@ type PlaneStream struct {
 	pad        int // empty extras appended to table rows
 	siteFile   string
 	names      nameCheck
+	row        Row // Next's row, reused
 }
 
 // OpenPlanes opens the planes of s. table, when not empty, names a CSV file
@@ -251,34 +213,13 @@ func (ps *PlaneStream) Table() (name, sum string) {
 	return ps.tableName, ps.hash.sum()
 }
 
-// Next reads the next plane into p; io.EOF after the last.
+// Next reads the next plane into p; io.EOF after the last. It is NextRow
+// followed by Parse.
 func (ps *PlaneStream) Next(p *Plane) error {
-	if ps.next < len(ps.inline) {
-		q := ps.inline[ps.next]
-		ps.next++
-		extras := p.Extras[:0]
-		for range ps.ExtraNames {
-			extras = append(extras, "")
-		}
-		if ps.inlineSet >= 0 && len(q.Extras) > 0 {
-			extras[ps.inlineSet] = q.Extras[0]
-		}
-		*p = q
-		p.Extras = extras
-		ps.names.add(p, false, ps.siteFile)
-		return nil
-	}
-	if ps.table == nil {
-		return io.EOF
-	}
-	if err := ps.table.Next(p); err != nil {
+	if err := ps.NextRow(&ps.row); err != nil {
 		return err
 	}
-	for range ps.pad {
-		p.Extras = append(p.Extras, "")
-	}
-	ps.names.add(p, true, ps.tableName)
-	return nil
+	return ps.Parse(&ps.row, p)
 }
 
 func (s *Site) open(name string) (io.ReadCloser, error) {
