@@ -153,3 +153,19 @@ func netIn(c *draw.Canvas, sq vg.Rectangle, l look) net {
 func netScore(_ look, main vg.Rectangle) float64 {
 	return float64(min(main.Max.X-main.Min.X, main.Max.Y-main.Min.Y))
 }
+
+// layFrameOf lays out a figure with the first of keys (fullest first) that
+// leaves its main drawing at least half of what the body under the title
+// would give it without a key, else with the last: figures with long keys
+// give their details up on small canvases rather than shrink to a blob.
+func layFrameOf(c draw.Canvas, title []string, keys []*keyBox, score scorer) frame {
+	var f frame
+	for _, k := range keys {
+		f = layFrame(c, title, k, score)
+		body := vg.Rectangle{Min: f.inner.Min, Max: vg.Point{X: f.inner.Max.X, Y: f.inner.Max.Y - f.title.height() - f.l.pt(6)}}
+		if score(f.l, f.main) >= 0.5*score(f.l, body) {
+			break
+		}
+	}
+	return f
+}
