@@ -145,7 +145,7 @@ func (t *TunnelProfile) Draw(c draw.Canvas) {
 	score := func(l look, main vg.Rectangle) float64 {
 		h := t.stack(l).layout(main)
 		w := main.Max.X - main.Min.X
-		return float64(h) * math.Min(1, float64(w/l.pt(300)))
+		return float64(h) * math.Min(1, float64(w/l.pt(420)))
 	}
 	f := layFrame(c, append([]string{t.Site}, t.Lines...), t.key(), score)
 	s := t.stack(f.l)
