@@ -30,8 +30,13 @@ type scorer func(l look, main vg.Rectangle) float64
 // leaves out the key's notes, then the title lines after the first two,
 // then the key, rather than draw over the drawing.
 func layFrame(c draw.Canvas, title []string, key *keyBox, score scorer) frame {
-	w, h := c.Max.X-c.Min.X, c.Max.Y-c.Min.Y
-	l := lookFor(w, h)
+	return layFrameFrom(c, lookFor(c.Max.X-c.Min.X, c.Max.Y-c.Min.Y), title, key, score)
+}
+
+// layFrameFrom is layFrame starting from look l: a chart that grows in
+// length only (a list of bars) keeps the text of a chart of the default
+// shape.
+func layFrameFrom(c draw.Canvas, l look, title []string, key *keyBox, score scorer) frame {
 	for {
 		f, ok := l.frameOn(c, title, key, score)
 		if ok {
