@@ -141,11 +141,11 @@ func (k *KinematicNet) ranked() []KinItem {
 }
 
 // nameRoom is how many names the net of radius r has room for in look l:
-// about one for every three lines of names down its diameter, within
-// [4, NameAll].
+// about one for every two and a half lines of names down its diameter,
+// within [6, NameAll].
 func nameRoom(l look, r vg.Length) int {
 	_, h := textBox(l.nameText(), "X")
-	return max(4, min(NameAll, int(2*r/(3*h))))
+	return max(6, min(NameAll, int(2*r/(2.5*h))))
 }
 
 // Draw draws the figure on c.

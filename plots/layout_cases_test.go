@@ -99,12 +99,12 @@ func demoDensityNet(t *testing.T, w, h vg.Length) *DensityNet {
 }
 
 // demoKinematic is the demo slope's kinematic net, as cleft slope builds it.
-func demoKinematic(t *testing.T) *KinematicNet {
+func demoKinematic(t testing.TB) *KinematicNet {
 	return kinematicOf(demoAssessment(t).Slope(), "demo", "Kinematic screening")
 }
 
 // demoTunnel is the demo tunnel's screening.
-func demoTunnel(t *testing.T) *tunnel.Screening {
+func demoTunnel(t testing.TB) *tunnel.Screening {
 	sc, err := demoAssessment(t).Tunnel()
 	if err != nil {
 		t.Fatal(err)

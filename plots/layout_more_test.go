@@ -18,7 +18,7 @@ import (
 // commands do (cmd/cleft/tunnelfig.go and chance.go), for the layout test.
 
 // demoProfile is the demo tunnel's along-alignment chart.
-func demoProfile(t *testing.T) *TunnelProfile {
+func demoProfile(t testing.TB) *TunnelProfile {
 	sc := demoTunnel(t)
 	pr := &TunnelProfile{Site: "Quillon Ridge cutting and west portal (fictional demo)", ZoneLimit: sc.Tunnel.Limit(),
 		Lines: []string{"Along the alignment: chainage 0 to 1400 m, radius 4.2 m, UCS 45 MPa", demoAssessment(t).Site.Summary()}}
@@ -39,7 +39,7 @@ func demoProfile(t *testing.T) *TunnelProfile {
 }
 
 // demoWall is the perimeter plot of the demo tunnel's worst station.
-func demoWall(t *testing.T) *TunnelWall {
+func demoWall(t testing.TB) *TunnelWall {
 	sc := demoTunnel(t)
 	st := sc.Stations[sc.Worst()]
 	wall := &TunnelWall{Site: "Quillon Ridge cutting and west portal (fictional demo)", Step: tunnel.PerimeterStep, UCS: sc.Tunnel.UCS, Radius: sc.Tunnel.Radius,
@@ -60,7 +60,7 @@ func demoWall(t *testing.T) *TunnelWall {
 
 // demoSection is the cross-section of the demo tunnel at the station of
 // its deepest bounded zone.
-func demoSection(t *testing.T) *TunnelSection {
+func demoSection(t testing.TB) *TunnelSection {
 	sc := demoTunnel(t)
 	i, _, ok := sc.Deepest(-1, true)
 	if !ok {
@@ -102,7 +102,7 @@ const chanceFieldTestN = 61
 
 // demoChance runs the demo's cases and a short Monte Carlo (seeded by the
 // site), once.
-func demoChance(t *testing.T) ([]study.Target, []study.CaseRun, *study.Outcome) {
+func demoChance(t testing.TB) ([]study.Target, []study.CaseRun, *study.Outcome) {
 	a := demoAssessment(t)
 	chanceOnce.Do(func() {
 		if chanceTargets, chanceErr = study.Targets(a); chanceErr != nil {
@@ -121,7 +121,7 @@ func demoChance(t *testing.T) ([]study.Target, []study.CaseRun, *study.Outcome) 
 }
 
 // demoChanceNet is the demo's probability stereonet.
-func demoChanceNet(t *testing.T) *ChanceNet {
+func demoChanceNet(t testing.TB) *ChanceNet {
 	a := demoAssessment(t)
 	ts, runs, out := demoChance(t)
 	z := a.FigureDepth()
@@ -142,7 +142,7 @@ func demoChanceNet(t *testing.T) *ChanceNet {
 }
 
 // demoRankBars is the demo's rank-correlation chart.
-func demoRankBars(t *testing.T) *RankBars {
+func demoRankBars(t testing.TB) *RankBars {
 	a := demoAssessment(t)
 	ts, runs, out := demoChance(t)
 	bars := &RankBars{Site: a.Site.Name, MaxInputs: 8,
@@ -187,7 +187,7 @@ func kinematicOf(sc *slope.Screening, site, line string) *KinematicNet {
 // crowdedKinematic is the demo slope against 24 seeded random planes
 // dipping 45–80° within 70° of the face's dip direction: many feasible
 // wedges, more than the net has room to name.
-func crowdedKinematic(t *testing.T) *KinematicNet {
+func crowdedKinematic(t testing.TB) *KinematicNet {
 	sl := *demoAssessment(t).Site.Slope
 	rng := rand.New(rand.NewPCG(15, 2))
 	var cands []slope.Candidate

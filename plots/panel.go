@@ -32,22 +32,26 @@ type tick struct {
 }
 
 // linearTicks returns ticks every 1, 2 or 5 × 10ⁿ across a, as many as
-// keep them at least gap apart on an axis of length n (at least one, the
-// first round value in the range).
+// keep them at least gap apart on an axis of length n, and at least one.
 func linearTicks(a axisScale, n, gap vg.Length) []tick {
-	for k := max(1, int(n/gap)); k >= 1; k-- {
+	var best []tick
+	for k := 1; k <= 60; k++ { // more ticks as k grows; keep the last spaced
 		var ts []tick
 		for _, t := range (niceTicks{n: k}).Ticks(a.lo, a.hi) {
 			ts = append(ts, tick{v: t.Value, label: t.Label})
 		}
-		if spaced(a, ts, n, gap) || k == 1 {
-			if len(ts) > 1 && !spaced(a, ts, n, gap) {
-				ts = ts[:1]
-			}
-			return ts
+		if len(ts) == 0 {
+			continue
 		}
+		if !spaced(a, ts, n, gap) {
+			if best == nil {
+				best = ts[len(ts)/2 : len(ts)/2+1]
+			}
+			break
+		}
+		best = ts
 	}
-	return nil
+	return best
 }
 
 // logTicks returns ticks at 1, 2 and 5 × 10ⁿ across a (then 1 and 10ⁿ
