@@ -49,7 +49,7 @@ func boxSample(fill color.Color, across *draw.LineStyle) func(c *draw.Canvas, at
 
 // key returns the chart's key: every series, line, band and shading.
 func (t *TunnelProfile) key() *keyBox {
-	k := &keyBox{}
+	k := &keyBox{notes: []string{"far-field FS on a logarithmic scale: equal steps are equal ratios, FS = 1 in the middle"}}
 	if len(t.Series) > 0 {
 		k.rows = append(k.rows, keyRow{kind: rowHead, text: "planes and sets"})
 	}
