@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"image/color"
 	"math"
+	"strconv"
 
 	"cleft/insitu"
 	"cleft/planes"
@@ -38,6 +39,8 @@ type ChanceNet struct {
 	Proj  Projection
 	Field *Field // probabilities ∈ [0, 1]; required
 	Poles []ChancePole
+
+	dropped int // names left out for want of room, in the last Draw
 }
 
 // ChanceNodes returns the orientations whose poles are the nodes of an
@@ -68,158 +71,120 @@ var chanceLevels = []float64{0.05, 0.5, 0.95}
 
 // Draw draws the figure on c.
 func (s *ChanceNet) Draw(c draw.Canvas) {
-	margin := vg.Points(12)
-	c = draw.Crop(c, margin, -margin, margin, -margin)
-	th := titleBlock(&c, append([]string{s.Site}, s.Lines...)) + vg.Points(6)
-	body := draw.Crop(c, 0, 0, 0, -th)
-	right := vg.Points(150)
-	side := min(body.Max.X-body.Min.X-right, body.Max.Y-body.Min.Y)
-	label := vg.Points(14)
-	n := net{c: &c, cx: body.Min.X + side/2, cy: body.Max.Y - side/2, r: side/2 - label}
 	if s.Field == nil {
 		panic("plots: ChanceNet.Field is nil")
 	}
+	f := layFrame(c, append([]string{s.Site}, s.Lines...), s.key(), netScore)
+	l := f.l
+	n := netIn(&c, f.square(), l)
+	g := glyphScale(n.r)
 	var ramp Ramp
 	drawRaster(n, s.Field, func(v float64) color.NRGBA { return pale(ramp.At(v)) })
-	thin := draw.LineStyle{Color: color.NRGBA{R: 0x10, G: 0x10, B: 0x10, A: 0xa0}, Width: vg.Points(0.5)}
-	for _, l := range chanceLevels {
-		sty := thin
-		if l == 0.5 {
-			sty = draw.LineStyle{Color: warning, Width: vg.Points(1.3), Dashes: []vg.Length{vg.Points(5), vg.Points(2)}}
-		}
-		for _, line := range Chain(s.Field.Contour(s.Field.Values, l)) {
-			n.c.StrokeLines(sty, n.path(line))
+	for _, lv := range chanceLevels {
+		for _, line := range Chain(s.Field.Contour(s.Field.Values, lv)) {
+			n.c.StrokeLines(levelStyle(lv), n.path(line))
 		}
 	}
-	drawPrimitive(n)
-	lab := textStyle(7, false, ink)
-	lab.XAlign, lab.YAlign = draw.XLeft, draw.YCenter
+	drawPrimitiveLook(n, l)
 	for _, pass := range []planes.PlaneState{planes.Stable, planes.Critical, planes.Opening} {
 		for _, p := range s.Poles {
-			if p.State != pass {
-				continue
+			if p.State == pass {
+				stateGlyph(n.c, p.State, n.pt(s.Proj.Project(p.Orientation.Pole())), ramp.At(p.P), g)
 			}
-			at := n.pt(s.Proj.Project(p.Orientation.Pole()))
-			stateGlyph(n.c, p.State, at, ramp.At(p.P), 1)
 		}
 	}
-	drawAxes(n, s.Proj, s.State.Principal, 1)
-	var placed []vg.Point
-	for i := range 3 { // keep clear of the axes' labels
-		l := s.State.Principal.Axis(i)
-		q := s.Proj.Project(l)
-		for _, pt := range []Point{q, {X: -q.X, Y: -q.Y}} {
-			if pt != q && l.Plunge != 0 {
-				continue
-			}
-			at := n.pt(pt)
-			placed = append(placed, at, vg.Point{X: at.X + vg.Points(14), Y: at.Y + vg.Points(5)})
+	drawAxes(n, s.Proj, s.State.Principal, g)
+
+	lab := &labeller{bounds: f.inner, pad: l.pt(1)}
+	lab.blockText(f.titleRect())
+	lab.blockText(f.keyRect())
+	lab.blockText(n.northBox(l))
+	for _, p := range s.Poles {
+		lab.block(square(n.pt(s.Proj.Project(p.Orientation.Pole())), stateRadius(p.State, g)))
+	}
+	for i := range 3 {
+		for _, q := range axisPoints(s.Proj, s.State.Principal, i) {
+			lab.block(square(n.pt(q), axisRadius(g)))
+		}
+	}
+	axis := l.text(9, 6.5, true, ink)
+	for i := range 3 {
+		for _, q := range axisPoints(s.Proj, s.State.Principal, i) {
+			lab.place(axis, axisLabels[i], n.pt(q), axisRadius(g), math.Pi/4, 6)
 		}
 	}
 	for _, p := range s.Poles {
-		if !p.Label {
-			continue
+		if p.Label {
+			lab.place(l.nameText(), fmt.Sprintf("%s %.2f", p.Name, p.P), n.pt(s.Proj.Project(p.Orientation.Pole())), stateRadius(p.State, g), 0, 24)
 		}
-		at := n.pt(s.Proj.Project(p.Orientation.Pole()))
-		txt := fmt.Sprintf("%s %.2f", p.Name, p.P)
-		// Try beside the pole, then above, below and to the left, stepping
-		// away from labels already placed.
-		w := lab.Width(txt)
-		var pos vg.Point
-		for k := 0; k < 12; k++ {
-			d := vg.Points(6 + 4*float64(k/4))
-			switch k % 4 {
-			case 0:
-				pos = vg.Point{X: at.X + d, Y: at.Y - d}
-			case 1:
-				pos = vg.Point{X: at.X + d, Y: at.Y + d}
-			case 2:
-				pos = vg.Point{X: at.X - d - w, Y: at.Y - d}
-			default:
-				pos = vg.Point{X: at.X - d - w, Y: at.Y + d}
-			}
-			if !labelCrowded(pos, w, placed) {
-				break
-			}
-		}
-		placed = append(placed, pos, vg.Point{X: pos.X + w, Y: pos.Y})
-		n.c.StrokeLine2(draw.LineStyle{Color: grey, Width: vg.Points(0.4)}, at.X, at.Y, pos.X+w/2, pos.Y)
-		haloText(n.c, lab, pos, txt)
 	}
-	s.drawKey(draw.Crop(body, side+vg.Points(30), 0, 0, 0))
+	lab.draw(&c)
+	f.drawText(&c)
+	s.dropped = lab.dropped
 }
 
-func (s *ChanceNet) drawKey(c draw.Canvas) {
-	x, y := c.Min.X, c.Max.Y
-	head := textStyle(8, true, ink)
-	c.FillText(head, vg.Point{X: x, Y: y}, "P(critical or opening)")
-	y -= head.Height("X") + vg.Points(8)
-	barW, barH := vg.Points(12), (c.Max.Y-c.Min.Y)*0.42
-	top, bottom := y, y-barH
-	var ramp Ramp
-	const steps = 100
-	for k := range steps {
-		y0 := bottom + barH*vg.Length(k)/steps
-		y1 := bottom + barH*vg.Length(k+1)/steps
-		c.FillPolygon(ramp.At((float64(k)+0.5)/steps), []vg.Point{{X: x, Y: y0}, {X: x + barW, Y: y0}, {X: x + barW, Y: y1 + 0.3}, {X: x, Y: y1 + 0.3}})
+// levelStyle is the line of the contour at probability lv: red dashes at
+// 0.5, thin dark lines else.
+func levelStyle(lv float64) draw.LineStyle {
+	if lv == 0.5 {
+		return draw.LineStyle{Color: warning, Width: vg.Points(1.3), Dashes: []vg.Length{vg.Points(5), vg.Points(2)}}
 	}
-	frame := draw.LineStyle{Color: ink, Width: vg.Points(0.6)}
-	c.StrokeLines(frame, []vg.Point{{X: x, Y: bottom}, {X: x + barW, Y: bottom}, {X: x + barW, Y: top}, {X: x, Y: top}, {X: x, Y: bottom}})
-	tick := textStyle(7, false, ink)
-	tick.YAlign = draw.YCenter
-	for k := 0; k <= 10; k += 2 {
-		v := float64(k) / 10
-		yy := bottom + barH*vg.Length(v)
-		c.StrokeLine2(frame, x+barW, yy, x+barW+vg.Points(3), yy)
-		c.FillText(tick, vg.Point{X: x + barW + vg.Points(5), Y: yy}, fmt.Sprintf("%.1f", v))
-	}
-	for _, l := range chanceLevels {
-		sty := draw.LineStyle{Color: ink, Width: vg.Points(0.5)}
-		if l == 0.5 {
-			sty = draw.LineStyle{Color: warning, Width: vg.Points(1.3)}
-		}
-		yy := bottom + barH*vg.Length(l)
-		c.StrokeLine2(sty, x-2, yy, x+barW+2, yy)
-	}
-	note := textStyle(7, false, grey)
-	for i, t := range []string{"light: more often unstable", "thin lines: 0.05 and 0.95", "red dashes: as likely as not (0.5)"} {
-		c.FillText(note, vg.Point{X: x, Y: bottom - vg.Points(5+9*float64(i))}, t)
-	}
-	y = bottom - vg.Points(40)
-	row := func(glyph func(at vg.Point), txt string) {
-		glyph(vg.Point{X: x + vg.Points(6), Y: y})
-		t := textStyle(7.5, false, ink)
-		t.YAlign = draw.YCenter
-		c.FillText(t, vg.Point{X: x + vg.Points(18), Y: y}, txt)
-		y -= vg.Points(12.5)
-	}
+	return draw.LineStyle{Color: color.NRGBA{R: 0x10, G: 0x10, B: 0x10, A: 0xa0}, Width: vg.Points(0.5)}
+}
+
+// key returns the probability net's key.
+func (s *ChanceNet) key() *keyBox {
+	k := &keyBox{head: "P(critical or opening)", bar: chanceBar{},
+		notes: []string{"light: more often unstable", "thin lines: 0.05 and 0.95; red dashes: as likely as not (0.5)"}}
 	count := map[planes.PlaneState]int{}
 	for _, p := range s.Poles {
 		count[p.State]++
 	}
-	mid := ramp.At(0.5)
-	row(func(a vg.Point) { stateGlyph(&c, planes.Stable, a, mid, 1) }, fmt.Sprintf("pole, stable in the base (%d)", count[planes.Stable]))
-	row(func(a vg.Point) { stateGlyph(&c, planes.Critical, a, mid, 1) }, fmt.Sprintf("pole, critical in the base (%d)", count[planes.Critical]))
-	row(func(a vg.Point) { stateGlyph(&c, planes.Opening, a, mid, 1) }, fmt.Sprintf("pole, opening in the base (%d)", count[planes.Opening]))
-	note2 := textStyle(7, false, grey)
-	note2.YAlign = draw.YCenter
-	c.FillText(note2, vg.Point{X: x, Y: y + vg.Points(2)}, "fill: the plane's own probability")
-	y -= vg.Points(12)
-	for i := range 3 {
-		l := s.State.Principal.Axis(i)
-		row(func(a vg.Point) { axisGlyph(&c, i, a, 1) }, fmt.Sprintf("%s axis, base (%s)", axisLabels[i], fmtLine(l.Trend, l.Plunge)))
+	mid := Ramp{}.At(0.5)
+	state := func(st planes.PlaneState, txt string) keyRow {
+		return keyRow{glyph: func(c *draw.Canvas, at vg.Point, l look) { stateGlyph(c, st, at, mid, keyGlyph(l)) }, text: txt}
 	}
+	k.rows = append(k.rows,
+		state(planes.Stable, fmt.Sprintf("pole, stable in the base (%d)", count[planes.Stable])),
+		state(planes.Critical, fmt.Sprintf("pole, critical in the base (%d)", count[planes.Critical])),
+		state(planes.Opening, fmt.Sprintf("pole, opening in the base (%d)", count[planes.Opening])),
+		keyRow{kind: rowNote, text: "fill: the plane's own probability; named: the least sure, with it"})
+	for i := range 3 {
+		a := s.State.Principal.Axis(i)
+		k.rows = append(k.rows, keyRow{glyph: func(c *draw.Canvas, at vg.Point, l look) { axisGlyph(c, i, at, keyGlyph(l)) },
+			text: fmt.Sprintf("%s axis, base (%s)", axisLabels[i], fmtLine(a.Trend, a.Plunge))})
+	}
+	return k
 }
 
-// labelCrowded reports whether a label of width w at pos comes within 9 pt
-// of the ends of labels already placed.
-func labelCrowded(pos vg.Point, w vg.Length, placed []vg.Point) bool {
-	for _, q := range placed {
-		for _, x := range []vg.Length{pos.X, pos.X + w/2, pos.X + w} {
-			if math.Abs(float64(x-q.X)) < 9+float64(w)/2 && math.Abs(float64(pos.Y-q.Y)) < 9 {
-				return true
-			}
-		}
+// chanceBar is the probability net's colour bar: the ramp from 0 to 1,
+// rising to the right, with the contour levels marked.
+type chanceBar struct{}
+
+func (chanceBar) strip(l look) vg.Length { return l.pt(8) }
+
+func (b chanceBar) height(l look, _ vg.Length) vg.Length {
+	_, th := textBox(l.tickText(), "0")
+	return b.strip(l) + l.pt(3) + th + l.pt(2)
+}
+
+func (b chanceBar) draw(c *draw.Canvas, l look, r vg.Rectangle) {
+	w := min(r.Max.X-r.Min.X, l.pt(200))
+	x0, top := r.Min.X, r.Max.Y-l.pt(2)
+	bottom := top - b.strip(l)
+	at := func(v float64) vg.Length { return x0 + w*vg.Length(v) }
+	var ramp Ramp
+	const steps = 100
+	for k := range steps {
+		v0, v1 := float64(k)/steps, float64(k+1)/steps
+		c.FillPolygon(ramp.At(0.5*(v0+v1)), []vg.Point{{X: at(v0), Y: bottom}, {X: at(v1) + 0.3, Y: bottom}, {X: at(v1) + 0.3, Y: top}, {X: at(v0), Y: top}})
 	}
-	return false
+	frame := draw.LineStyle{Color: ink, Width: vg.Points(0.6)}
+	c.StrokeLines(frame, []vg.Point{{X: x0, Y: bottom}, {X: x0 + w, Y: bottom}, {X: x0 + w, Y: top}, {X: x0, Y: top}, {X: x0, Y: bottom}})
+	for _, lv := range chanceLevels {
+		sty := levelStyle(lv)
+		sty.Dashes = nil
+		c.StrokeLine2(sty, at(lv), bottom-l.pt(1.5), at(lv), top+l.pt(1.5))
+	}
+	barTicks(c, l, r, bottom, []float64{0, 0.2, 0.4, 0.6, 0.8, 1}, at, func(v float64) string { return strconv.FormatFloat(v, 'f', 1, 64) })
 }

@@ -30,8 +30,13 @@ type scorer func(l look, main vg.Rectangle) float64
 // leaves out the key's notes, then the title lines after the first two,
 // then the key, rather than draw over the drawing.
 func layFrame(c draw.Canvas, title []string, key *keyBox, score scorer) frame {
-	w, h := c.Max.X-c.Min.X, c.Max.Y-c.Min.Y
-	l := lookFor(w, h)
+	return layFrameFrom(c, lookFor(c.Max.X-c.Min.X, c.Max.Y-c.Min.Y), title, key, score)
+}
+
+// layFrameFrom is layFrame starting from look l: a chart that grows in
+// length only (a list of bars) keeps the text of a chart of the default
+// shape.
+func layFrameFrom(c draw.Canvas, l look, title []string, key *keyBox, score scorer) frame {
 	for {
 		f, ok := l.frameOn(c, title, key, score)
 		if ok {
@@ -152,4 +157,20 @@ func netIn(c *draw.Canvas, sq vg.Rectangle, l look) net {
 // netScore rates a main area for a net: the side of its largest square.
 func netScore(_ look, main vg.Rectangle) float64 {
 	return float64(min(main.Max.X-main.Min.X, main.Max.Y-main.Min.Y))
+}
+
+// layFrameOf lays out a figure with the first of keys (fullest first) that
+// leaves its main drawing at least half of what the body under the title
+// would give it without a key, else with the last: figures with long keys
+// give their details up on small canvases rather than shrink to a blob.
+func layFrameOf(c draw.Canvas, title []string, keys []*keyBox, score scorer) frame {
+	var f frame
+	for _, k := range keys {
+		f = layFrame(c, title, k, score)
+		body := vg.Rectangle{Min: f.inner.Min, Max: vg.Point{X: f.inner.Max.X, Y: f.inner.Max.Y - f.title.height() - f.l.pt(6)}}
+		if score(f.l, f.main) >= 0.5*score(f.l, body) {
+			break
+		}
+	}
+	return f
 }

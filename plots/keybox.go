@@ -11,6 +11,38 @@ import (
 type keyRow struct {
 	glyph func(c *draw.Canvas, at vg.Point, l look) // draws the symbol centred at at; nil for words alone
 	text  string
+	kind  rowKind
+}
+
+// rowKind is how a key row's words are set.
+type rowKind int
+
+const (
+	rowPlain rowKind = iota // in the key's text, beside the symbol column
+	rowBold                 // in bold, beside the symbol column
+	rowNote                 // in the grey of the notes, beside the symbol column
+	rowHead                 // a bold heading across the column, symbol column included
+)
+
+// style returns the text style of the row in look l.
+func (r keyRow) style(l look) draw.TextStyle {
+	switch r.kind {
+	case rowBold:
+		return l.text(7.5, 5.5, true, ink)
+	case rowNote:
+		return l.noteText()
+	case rowHead:
+		return l.headText()
+	}
+	return l.keyText()
+}
+
+// indent returns how far the row's words start from the column's left.
+func (r keyRow) indent(l look) vg.Length {
+	if r.kind == rowHead {
+		return 0
+	}
+	return l.glyphCol()
 }
 
 // keyBar is a colour bar in a key, drawn across the key's width.
@@ -61,7 +93,7 @@ func (k *keyBox) naturalWidth(l look, most vg.Length) vg.Length {
 		w = max(w, textWidth(l.noteText(), n))
 	}
 	for _, r := range k.rows {
-		w = max(w, l.glyphCol()+textWidth(l.keyText(), r.text))
+		w = max(w, r.indent(l)+textWidth(r.style(l), r.text))
 	}
 	return min(w, most)
 }
@@ -97,7 +129,7 @@ func (k *keyBox) fit(l look, w vg.Length) *keyLayout {
 	gc := l.glyphCol()
 	natural := vg.Length(0)
 	for _, r := range k.rows {
-		natural = max(natural, gc+textWidth(l.keyText(), r.text))
+		natural = max(natural, r.indent(l)+textWidth(r.style(l), r.text))
 	}
 	minCol := min(w, max(gc+l.pt(90), min(natural, l.pt(140))))
 	most := max(1, min(len(k.rows), int((w+colGap)/(minCol+colGap))))
@@ -116,7 +148,6 @@ func (k *keyBox) fit(l look, w vg.Length) *keyLayout {
 func (kl *keyLayout) columns(cols int, colGap vg.Length) *keyLayout {
 	c := *kl
 	l, k := c.l, c.k
-	gc := l.glyphCol()
 	c.cols = cols
 	c.colW = (c.w - vg.Length(cols-1)*colGap) / vg.Length(cols)
 	c.perCol = (len(k.rows) + cols - 1) / cols
@@ -125,12 +156,15 @@ func (kl *keyLayout) columns(cols int, colGap vg.Length) *keyLayout {
 	colH := make([]vg.Length, cols)
 	for i, r := range k.rows {
 		t := &textLines{gap: l.pt(1)}
-		t.add(l.keyText(), r.text, c.colW-gc)
+		t.add(r.style(l), r.text, c.colW-r.indent(l))
 		h := t.height()
 		if r.glyph != nil {
 			h = max(h, symbol)
 		}
 		h += l.pt(3)
+		if r.kind == rowHead && i%c.perCol != 0 {
+			h += l.pt(3) // room above a heading that does not start a column
+		}
 		c.rows = append(c.rows, t)
 		c.rowH = append(c.rowH, h)
 		colH[i/c.perCol] += h
@@ -169,6 +203,9 @@ func (kl *keyLayout) draw(c *draw.Canvas, x, top vg.Length) {
 		cx := x + vg.Length(col)*(kl.colW+colGap)
 		t := kl.rows[i]
 		th := t.height()
+		if r.kind == rowHead && i%kl.perCol != 0 {
+			ry -= l.pt(3)
+		}
 		textTop := ry
 		if r.glyph != nil {
 			// Centre the first line of words and the symbol on one line.
@@ -178,8 +215,11 @@ func (kl *keyLayout) draw(c *draw.Canvas, x, top vg.Length) {
 			r.glyph(c, vg.Point{X: cx + gc/2 - l.pt(2), Y: mid}, l)
 		}
 		if th > 0 {
-			t.draw(c, cx+gc, textTop)
+			t.draw(c, cx+r.indent(l), textTop)
 		}
 		ry -= kl.rowH[i]
+		if r.kind == rowHead && i%kl.perCol != 0 {
+			ry += l.pt(3) // rowH holds the room above the heading, spent already
+		}
 	}
 }

@@ -1,7 +1,6 @@
 package plots
 
 import (
-	"fmt"
 	"image/color"
 	"math"
 	"sort"
@@ -25,6 +24,9 @@ type KinItem struct {
 	Toppling     bool            // feasible for flexural toppling (dip vectors only)
 	OnePlane     bool            // a feasible wedge that slides on one of its planes alone
 	Fails        slope.Condition // of the sliding test (planar or wedge), when not feasible
+	// FS is the least factor of safety of a feasible case over its water
+	// cases; NaN when it has none. Names go to the least first.
+	FS float64
 }
 
 // KinematicNet is the kinematic stereonet of a cut slope, drawn with lines
@@ -46,6 +48,11 @@ type KinItem struct {
 // dip); the others are small circles (dip vectors) or
 // diamonds (lines of intersection) whose fill says which condition stops
 // them. The shapes carry the verdict without colour.
+//
+// It lays itself out like the tendency stereonet. The lines that can fail
+// are named, least factor of safety first, beside their symbol or further
+// out with a leader; when they are many, only as many as the net has room
+// for are named, and the key says how many more are not.
 type KinematicNet struct {
 	Site         string
 	Lines        []string
@@ -55,6 +62,9 @@ type KinematicNet struct {
 	LateralLimit float64 // °
 	ToppleLimit  float64 // °
 	Items        []KinItem
+
+	named   int // lines that can fail named in the last Draw
+	dropped int // names left out for want of room, in the last Draw
 }
 
 // The tones of the kinematic net, from the project's ramp.
@@ -69,66 +79,6 @@ var (
 	// toppleInk is the blue of the tunnel wall's opening arcs.
 	toppleInk = color.NRGBA{R: 0x1f, G: 0x4e, B: 0x8c, A: 0xff}
 )
-
-// Draw draws the figure on c.
-func (k *KinematicNet) Draw(c draw.Canvas) {
-	margin := vg.Points(12)
-	c = draw.Crop(c, margin, -margin, margin, -margin)
-	th := titleBlock(&c, append([]string{k.Site}, k.Lines...)) + vg.Points(6)
-	body := draw.Crop(c, 0, 0, 0, -th)
-	side := min(body.Max.X-body.Min.X-vg.Points(170), body.Max.Y-body.Min.Y)
-	n := net{c: &c, cx: body.Min.X + side/2, cy: body.Max.Y - side/2, r: side/2 - vg.Points(14)}
-
-	dd := k.Face.DipDirection()
-	wedge := k.zone(n, dd-89.9, dd+89.9)
-	planar := k.zone(n, dd-k.LateralLimit, dd+k.LateralLimit)
-	topple := k.toppleZone(n)
-	thin := func(clr color.Color, w float64) draw.LineStyle {
-		return draw.LineStyle{Color: clr, Width: vg.Points(w)}
-	}
-	if wedge != nil {
-		hatch(n.c, wedge, -35, vg.Points(7), thin(kinWedgeInk, 0.6))
-	}
-	if planar != nil {
-		hatch(n.c, planar, 55, vg.Points(3), thin(kinPlanarInk, 0.7))
-		n.c.StrokeLines(thin(kinPlanarInk, 1.2), append(planar, planar[0]))
-	}
-	if topple != nil {
-		hatch(n.c, topple, 0, vg.Points(3.5), thin(kinToppleInk, 0.8))
-		n.c.StrokeLines(thin(kinToppleInk, 1.2), append(topple, topple[0]))
-	}
-	drawPrimitive(n)
-
-	// Friction circle for lines, the lateral limits (solid, with a bar where
-	// they leave the friction circle) and the face's great circle.
-	fr := k.Proj.Radius((90 - k.Phi) * math.Pi / 180)
-	n.c.StrokeLines(thin(ink, 1), circlePath(n, fr, 240))
-	for _, d := range []float64{-k.LateralLimit, k.LateralLimit} {
-		s, co := geom.SinCosDeg(dd + d)
-		a, b := n.pt(Point{X: s * fr, Y: co * fr}), n.pt(Point{X: s, Y: co})
-		n.c.StrokeLines(thin(kinPlanarInk, 0.9), []vg.Point{a, b})
-		px, py := vg.Length(co)*vg.Points(3), -vg.Length(s)*vg.Points(3)
-		n.c.StrokeLines(thin(kinPlanarInk, 0.9), []vg.Point{{X: a.X - px, Y: a.Y - py}, {X: a.X + px, Y: a.Y + py}})
-	}
-	n.c.StrokeLines(thin(ink, 2), n.path(k.Proj.GreatCircle(k.Face, 120)))
-	lab := textStyle(8, true, ink)
-	lab.XAlign, lab.YAlign = draw.XCenter, draw.YBottom
-	mid := k.Proj.Project(k.Face.DipLine())
-	haloText(n.c, lab, n.pt(Point{X: mid.X * 0.9, Y: mid.Y * 0.9}), "face "+k.Face.String())
-
-	name := textStyle(7, true, ink)
-	name.XAlign, name.YAlign = draw.XLeft, draw.YBottom
-	items := append([]KinItem(nil), k.Items...)
-	sort.SliceStable(items, func(i, j int) bool { return !canFail(items[i]) && canFail(items[j]) }) // those that can fail on top
-	for _, it := range items {
-		at := n.pt(k.Proj.Project(it.Line))
-		kinGlyph(n.c, it, at)
-		if canFail(it) {
-			haloText(n.c, name, vg.Point{X: at.X + vg.Points(6), Y: at.Y + vg.Points(3)}, it.Name)
-		}
-	}
-	k.drawKey(draw.Crop(body, side+vg.Points(16), 0, 0, 0))
-}
 
 func canFail(it KinItem) bool { return it.Feasible || it.Toppling }
 
@@ -170,131 +120,128 @@ func (k *KinematicNet) toppleZone(n net) []vg.Point {
 	return n.path(append(poly, Point{}))
 }
 
-// kinGlyph draws one line: those that can fail large with a heavy outline
-// and the ramp's light fill (triangle: planar sliding; downward triangle:
-// flexural toppling; diamond: wedge sliding); the others small (circle: dip
-// vector; diamond: line of intersection), filled by the condition of the
-// sliding test that stops them: white when it does not daylight, the ramp's
-// middle when it daylights but is flatter than φ, its dark end when only the
-// lateral limit stops planar sliding.
-func kinGlyph(c *draw.Canvas, it KinItem, at vg.Point) {
-	heavy := draw.LineStyle{Color: poleInk, Width: vg.Points(1.5)}
-	poly := func(fill color.Color, edge draw.LineStyle, pts []vg.Point) {
-		pts = append(pts, pts[0])
-		c.FillPolygon(white, growPolygon(pts, at, 1.3))
-		c.FillPolygon(fill, pts)
-		c.StrokeLines(edge, pts)
-	}
-	diamond := func(r vg.Length) []vg.Point {
-		return []vg.Point{{X: at.X, Y: at.Y + r}, {X: at.X + r, Y: at.Y}, {X: at.X, Y: at.Y - r}, {X: at.X - r, Y: at.Y}}
-	}
-	switch {
-	case it.Intersection && it.Feasible:
-		poly(kinCanFail, heavy, diamond(vg.Points(5.2)))
-		if it.OnePlane {
-			c.StrokeLine2(draw.LineStyle{Color: poleInk, Width: vg.Points(1.2)}, at.X-vg.Points(5.2), at.Y, at.X+vg.Points(5.2), at.Y)
+// ranked returns the items that can fail, most important first: least FS
+// first, those without one (toppling, blocks without a factor of safety)
+// after, in their order.
+func (k *KinematicNet) ranked() []KinItem {
+	var out []KinItem
+	for _, it := range k.Items {
+		if canFail(it) {
+			out = append(out, it)
 		}
-		return
-	case it.Feasible:
-		r := vg.Points(5.4)
-		poly(kinCanFail, heavy, []vg.Point{{X: at.X, Y: at.Y + r}, {X: at.X - r*0.866, Y: at.Y - r/2}, {X: at.X + r*0.866, Y: at.Y - r/2}})
-		return
-	case it.Toppling:
-		r := vg.Points(5.4)
-		poly(kinCanFail, heavy, []vg.Point{{X: at.X, Y: at.Y - r}, {X: at.X + r*0.866, Y: at.Y + r/2}, {X: at.X - r*0.866, Y: at.Y + r/2}})
-		return
 	}
-	var fill color.Color = white
-	switch {
-	case it.Fails&slope.Daylight != 0:
-	case it.Fails&slope.Friction != 0:
-		fill = kinShort
-	case it.Fails&slope.Lateral != 0:
-		fill = kinLateral
-	}
-	edge := draw.LineStyle{Color: grey, Width: vg.Points(0.8)}
-	if it.Intersection {
-		poly(fill, edge, diamond(vg.Points(3.4)))
-		return
-	}
-	r := vg.Points(2.8)
-	c.DrawGlyph(draw.GlyphStyle{Color: fill, Radius: r, Shape: draw.CircleGlyph{}}, at)
-	c.DrawGlyph(draw.GlyphStyle{Color: grey, Radius: r, Shape: draw.RingGlyph{}}, at)
-}
-
-// growPolygon scales a closed polygon about o so that its halo is d points wider.
-func growPolygon(pts []vg.Point, o vg.Point, d float64) []vg.Point {
-	out := make([]vg.Point, len(pts))
-	for i, p := range pts {
-		dx, dy := float64(p.X-o.X), float64(p.Y-o.Y)
-		l := math.Hypot(dx, dy)
-		f := 1.0
-		if l > 0 {
-			f = (l + d) / l
+	sort.SliceStable(out, func(i, j int) bool {
+		a, b := out[i].FS, out[j].FS
+		if math.IsNaN(b) {
+			return !math.IsNaN(a)
 		}
-		out[i] = vg.Point{X: o.X + vg.Length(dx*f), Y: o.Y + vg.Length(dy*f)}
-	}
+		return a < b
+	})
 	return out
 }
 
-func (k *KinematicNet) drawKey(c draw.Canvas) {
-	x, y := c.Min.X, c.Max.Y
-	head := textStyle(8, true, ink)
-	count := func(f func(KinItem) bool) int {
-		n := 0
-		for _, it := range k.Items {
-			if f(it) {
-				n++
-			}
+// nameRoom is how many names the net of radius r has room for in look l:
+// about one for every two and a half lines of names down its diameter,
+// within [6, NameAll].
+func nameRoom(l look, r vg.Length) int {
+	_, h := textBox(l.nameText(), "X")
+	return max(6, min(NameAll, int(2*r/(2.5*h))))
+}
+
+// Draw draws the figure on c.
+func (k *KinematicNet) Draw(c draw.Canvas) {
+	ranked := k.ranked()
+	most := len(ranked)
+	var f frame
+	var n net
+	var lab *labeller
+	for {
+		f = layFrameOf(c, append([]string{k.Site}, k.Lines...), k.keys(len(ranked)-most), netScore)
+		n = netIn(&c, f.square(), f.l)
+		if room := nameRoom(f.l, n.r); most > room {
+			most = room
+			continue
 		}
-		return n
+		var placed int
+		lab, placed = k.names(f, n, ranked[:most])
+		if placed == most {
+			break
+		}
+		most = placed // name the most important only; the key counts the others
 	}
-	sub := func(s string) {
-		c.FillText(head, vg.Point{X: x, Y: y}, s)
-		y -= vg.Points(16)
+	g := glyphScale(n.r)
+	k.drawZones(n, f.l)
+	// Those held back first, then those that can fail, least FS on top.
+	for _, it := range k.Items {
+		if !canFail(it) {
+			kinGlyph(n.c, it, n.pt(k.Proj.Project(it.Line)), g)
+		}
 	}
-	row := func(glyph func(vg.Point), txt string) {
-		glyph(vg.Point{X: x + vg.Points(7), Y: y})
-		t := textStyle(7.5, false, ink)
-		t.YAlign = draw.YCenter
-		c.FillText(t, vg.Point{X: x + vg.Points(20), Y: y}, txt)
-		y -= vg.Points(14)
+	for i := len(ranked) - 1; i >= 0; i-- { // the named ones are the first
+		kinGlyph(n.c, ranked[i], n.pt(k.Proj.Project(ranked[i].Line)), g)
 	}
-	sub("lines that can fail (named)")
-	row(func(a vg.Point) { kinGlyph(&c, KinItem{Feasible: true}, a) }, fmt.Sprintf("plane's dip vector: planar sliding (%d)", count(func(i KinItem) bool { return !i.Intersection && i.Feasible })))
-	row(func(a vg.Point) { kinGlyph(&c, KinItem{Intersection: true, Feasible: true}, a) }, fmt.Sprintf("line of intersection: wedge sliding (%d)", count(func(i KinItem) bool { return i.Intersection && i.Feasible })))
-	row(func(a vg.Point) { kinGlyph(&c, KinItem{Intersection: true, Feasible: true, OnePlane: true}, a) }, "barred: on one plane alone (tested by its dip)")
-	row(func(a vg.Point) { kinGlyph(&c, KinItem{Toppling: true}, a) }, fmt.Sprintf("plane's dip vector: flexural toppling (%d)", count(func(i KinItem) bool { return i.Toppling })))
-	y -= vg.Points(4)
-	sub("lines held back (circle: plane, diamond: wedge)")
-	row(func(a vg.Point) { kinGlyph(&c, KinItem{Fails: slope.Lateral}, a) }, "dark: only the lateral limit holds it")
-	row(func(a vg.Point) { kinGlyph(&c, KinItem{Intersection: true, Fails: slope.Friction}, a) }, "mid tone: daylights, flatter than φ")
-	row(func(a vg.Point) { kinGlyph(&c, KinItem{Intersection: true, Fails: slope.Daylight}, a) }, "white: does not daylight")
-	y -= vg.Points(4)
-	sub("zones and limits")
-	box := func(a vg.Point) []vg.Point {
-		return []vg.Point{{X: a.X - 7, Y: a.Y - 5}, {X: a.X + 7, Y: a.Y - 5}, {X: a.X + 7, Y: a.Y + 5}, {X: a.X - 7, Y: a.Y + 5}}
+	lab.draw(&c)
+	f.drawText(&c)
+	k.named, k.dropped = most, lab.dropped
+}
+
+// names places the face's label and the names of the items, in order,
+// until one finds no room; it returns the labeller and how many were
+// placed.
+func (k *KinematicNet) names(f frame, n net, items []KinItem) (*labeller, int) {
+	l := f.l
+	g := glyphScale(n.r)
+	lab := &labeller{bounds: f.inner, pad: l.pt(1)}
+	lab.blockText(f.titleRect())
+	lab.blockText(f.keyRect())
+	lab.blockText(n.northBox(l))
+	for _, it := range k.Items {
+		lab.block(square(n.pt(k.Proj.Project(it.Line)), kinRadius(it, g)))
 	}
-	row(func(a vg.Point) {
-		hatch(&c, box(a), 55, vg.Points(3), draw.LineStyle{Color: kinPlanarInk, Width: vg.Points(0.7)})
-		c.StrokeLines(draw.LineStyle{Color: kinPlanarInk, Width: vg.Points(1.2)}, append(box(a), box(a)[0]))
-	}, fmt.Sprintf("planar sliding zone, within ±%g° (lateral limit)", k.LateralLimit))
-	row(func(a vg.Point) {
-		hatch(&c, box(a), -35, vg.Points(5), draw.LineStyle{Color: kinWedgeInk, Width: vg.Points(0.6)})
-	}, "wedge sliding zone: daylights, steeper than φ")
-	row(func(a vg.Point) {
-		hatch(&c, box(a), 0, vg.Points(3.5), draw.LineStyle{Color: kinToppleInk, Width: vg.Points(0.8)})
-		c.StrokeLines(draw.LineStyle{Color: kinToppleInk, Width: vg.Points(1.2)}, append(box(a), box(a)[0]))
-	}, fmt.Sprintf("flexural toppling envelope (±%g°)", k.ToppleLimit))
-	row(func(a vg.Point) {
-		c.StrokeLine2(draw.LineStyle{Color: ink, Width: vg.Points(2)}, a.X-7, a.Y, a.X+7, a.Y)
-	}, "face great circle: lines beyond it daylight")
-	row(func(a vg.Point) {
-		c.StrokeLine2(draw.LineStyle{Color: ink, Width: vg.Points(1)}, a.X-7, a.Y, a.X+7, a.Y)
-	}, fmt.Sprintf("friction circle, φ = %.1f°: lines inside plunge more", k.Phi))
-	row(func(a vg.Point) {
-		st := draw.LineStyle{Color: kinPlanarInk, Width: vg.Points(0.9)}
-		c.StrokeLine2(st, a.X-7, a.Y, a.X+7, a.Y)
-		c.StrokeLine2(st, a.X-7, a.Y-3, a.X-7, a.Y+3)
-	}, fmt.Sprintf("lateral limits, ±%g° of the face's dip direction", k.LateralLimit))
+	mid := k.Proj.Project(k.Face.DipLine())
+	lab.place(l.text(8, 6, true, ink), "face "+k.Face.String(), n.pt(mid), l.pt(2), math.Atan2(-mid.Y, -mid.X), 8)
+	for i, it := range items {
+		if !lab.place(l.nameText(), it.Name, n.pt(k.Proj.Project(it.Line)), kinRadius(it, g), 0, 24) {
+			lab.dropped--
+			return lab, i
+		}
+	}
+	return lab, len(items)
+}
+
+// drawZones draws the zones, the primitive, the friction circle, the
+// lateral limits and the face's great circle.
+func (k *KinematicNet) drawZones(n net, l look) {
+	dd := k.Face.DipDirection()
+	wedge := k.zone(n, dd-89.9, dd+89.9)
+	planar := k.zone(n, dd-k.LateralLimit, dd+k.LateralLimit)
+	topple := k.toppleZone(n)
+	if wedge != nil {
+		hatch(n.c, wedge, -35, vg.Points(7), thinLine(kinWedgeInk, 0.6))
+	}
+	if planar != nil {
+		hatch(n.c, planar, 55, vg.Points(3), thinLine(kinPlanarInk, 0.7))
+		n.c.StrokeLines(thinLine(kinPlanarInk, 1.2), append(planar, planar[0]))
+	}
+	if topple != nil {
+		hatch(n.c, topple, 0, vg.Points(3.5), thinLine(kinToppleInk, 0.8))
+		n.c.StrokeLines(thinLine(kinToppleInk, 1.2), append(topple, topple[0]))
+	}
+	drawPrimitiveLook(n, l)
+	// Friction circle for lines, the lateral limits (solid, with a bar where
+	// they leave the friction circle) and the face's great circle.
+	fr := k.Proj.Radius((90 - k.Phi) * math.Pi / 180)
+	n.c.StrokeLines(thinLine(ink, 1), circlePath(n, fr, 240))
+	for _, d := range []float64{-k.LateralLimit, k.LateralLimit} {
+		s, co := geom.SinCosDeg(dd + d)
+		a, b := n.pt(Point{X: s * fr, Y: co * fr}), n.pt(Point{X: s, Y: co})
+		n.c.StrokeLines(thinLine(kinPlanarInk, 0.9), []vg.Point{a, b})
+		px, py := vg.Length(co)*vg.Points(3), -vg.Length(s)*vg.Points(3)
+		n.c.StrokeLines(thinLine(kinPlanarInk, 0.9), []vg.Point{{X: a.X - px, Y: a.Y - py}, {X: a.X + px, Y: a.Y + py}})
+	}
+	n.c.StrokeLines(thinLine(ink, 2), n.path(k.Proj.GreatCircle(k.Face, 120)))
+}
+
+func thinLine(clr color.Color, w float64) draw.LineStyle {
+	return draw.LineStyle{Color: clr, Width: vg.Points(w)}
 }

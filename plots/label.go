@@ -115,15 +115,15 @@ func (p *labeller) place(sty draw.TextStyle, txt string, a vg.Point, rad vg.Leng
 	}
 	gap := p.pad + haloSize + vg.Points(0.8)
 	boxAt := func(theta float64, d vg.Length) vg.Rectangle {
+		// (u, v) is theta's direction taken to the square of half-side 1;
+		// the box touches the point a + d·(u, v) of the square of half-side
+		// d round a: with the middle of its near side when theta is level
+		// or upright, with its near corner on the diagonals, in between
+		// else, so that it lies d clear of a and as near as that allows.
 		s, c := math.Sincos(theta)
-		// Centre so that the box's nearest edge lies d from a along theta.
-		ext := vg.Length(math.Abs(c))*w/2 + vg.Length(math.Abs(s))*h/2
-		k := 1 / math.Max(math.Abs(c), math.Abs(s)) // to the edge of a square
-		cx := a.X + vg.Length(c)*(d*vg.Length(k)+ext)
-		cy := a.Y + vg.Length(s)*(d*vg.Length(k)+ext)
-		if math.Abs(s) < 1e-9 { // beside: keep the name's middle level with a
-			cy = a.Y
-		}
+		k := 1 / math.Max(math.Abs(c), math.Abs(s))
+		u, v := vg.Length(c*k), vg.Length(s*k)
+		cx, cy := a.X+d*u+u*w/2, a.Y+d*v+v*h/2
 		return vg.Rectangle{Min: vg.Point{X: cx - w/2, Y: cy - h/2}, Max: vg.Point{X: cx + w/2, Y: cy + h/2}}
 	}
 	// Beside the symbol: eight directions, nearest to prefer first.

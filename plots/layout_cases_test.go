@@ -9,7 +9,6 @@ import (
 	"cleft/planes/sets"
 	"cleft/planes/site"
 	"cleft/planes/site/demo"
-	"cleft/planes/slope"
 	"cleft/planes/tunnel"
 
 	"gonum.org/v1/plot/vg"
@@ -100,19 +99,12 @@ func demoDensityNet(t *testing.T, w, h vg.Length) *DensityNet {
 }
 
 // demoKinematic is the demo slope's kinematic net, as cleft slope builds it.
-func demoKinematic(t *testing.T) *KinematicNet {
-	sc := demoAssessment(t).Slope()
-	k := &KinematicNet{Site: "demo", Lines: []string{"Kinematic screening"}, Proj: EqualArea, Face: sc.Slope.Face, Phi: sc.Slope.FrictionAngle, LateralLimit: sc.Slope.LateralLimit, ToppleLimit: sc.Slope.ToppleLimit}
-	for _, c := range sc.Cases {
-		if c.Test == slope.PlanarTest || (c.Test == slope.WedgeTest && c.HasLine) {
-			k.Items = append(k.Items, KinItem{Name: sc.Names(c), Line: c.Line, Intersection: c.Test == slope.WedgeTest, Feasible: c.Feasible, Fails: c.Fails})
-		}
-	}
-	return k
+func demoKinematic(t testing.TB) *KinematicNet {
+	return kinematicOf(demoAssessment(t).Slope(), "demo", "Kinematic screening")
 }
 
 // demoTunnel is the demo tunnel's screening.
-func demoTunnel(t *testing.T) *tunnel.Screening {
+func demoTunnel(t testing.TB) *tunnel.Screening {
 	sc, err := demoAssessment(t).Tunnel()
 	if err != nil {
 		t.Fatal(err)
@@ -141,43 +133,13 @@ func layoutCases() []layoutCase {
 		{name: "mohr", build: func(t *testing.T, w, h vg.Length) Figure { return demoMohrOf(t, -1) }},
 		{name: "mohr-few-named", build: func(t *testing.T, w, h vg.Length) Figure { return demoMohrOf(t, 12) }},
 		{name: "density", build: func(t *testing.T, w, h vg.Length) Figure { return demoDensityNet(t, w, h) }},
-		{name: "kinematic", skip: "TODO: plots/kinematic.go is being changed on another branch; after the merge, lay it out with layFrame and the labeller (as plots/stereonet.go) and remove this skip",
-			build: func(t *testing.T, w, h vg.Length) Figure { return demoKinematic(t) }},
-		{name: "tunnel-profile", skip: "TODO: plots/tunnel.go is being changed on another branch; after the merge, size its text with look and place its labels with the labeller, then remove this skip",
-			build: func(t *testing.T, w, h vg.Length) Figure {
-				sc := demoTunnel(t)
-				pr := &TunnelProfile{Site: "demo", Lines: []string{"Along the alignment"}}
-				for _, st := range sc.Stations {
-					pr.Chainage, pr.Cover, pr.Ratio = append(pr.Chainage, st.Chainage), append(pr.Cover, st.Cover), append(pr.Ratio, st.Ratio)
-				}
-				for i, tg := range sc.Targets {
-					se := TunnelSeries{Name: tg.Name}
-					for _, st := range sc.Stations {
-						r := st.Rows[i]
-						se.FS, se.FarBad = append(se.FS, r.Far.FactorOfSafety), append(se.FarBad, r.Far.State != planes.Stable)
-						se.WallSlip = append(se.WallSlip, len(r.Critical) > 0 || len(r.Opening) > 0)
-					}
-					pr.Series = append(pr.Series, se)
-				}
-				return pr
-			}},
-		{name: "tunnel-wall", skip: "TODO: plots/tunnel.go is being changed on another branch; after the merge, size its text with look and place its ring labels with the labeller, then remove this skip",
-			build: func(t *testing.T, w, h vg.Length) Figure {
-				sc := demoTunnel(t)
-				st := sc.Stations[sc.Worst()]
-				wall := &TunnelWall{Site: "demo", Lines: []string{"Wall of the opening"}, Step: tunnel.PerimeterStep, UCS: sc.Tunnel.UCS, Radius: sc.Tunnel.Radius}
-				for _, p := range st.Wall {
-					wall.Sigma = append(wall.Sigma, p.Theta)
-				}
-				for i, tg := range sc.Targets {
-					ws := WallSet{Name: tg.Name}
-					for _, s := range st.Rows[i].Wall {
-						ws.Critical, ws.Opening = append(ws.Critical, s == planes.Critical), append(ws.Opening, s == planes.Opening)
-					}
-					wall.Sets = append(wall.Sets, ws)
-				}
-				return wall
-			}},
+		{name: "kinematic", build: func(t *testing.T, w, h vg.Length) Figure { return demoKinematic(t) }},
+		{name: "kinematic-crowded", build: func(t *testing.T, w, h vg.Length) Figure { return crowdedKinematic(t) }},
+		{name: "tunnel-profile", build: func(t *testing.T, w, h vg.Length) Figure { return demoProfile(t) }},
+		{name: "tunnel-wall", build: func(t *testing.T, w, h vg.Length) Figure { return demoWall(t) }},
+		{name: "tunnel-section", build: func(t *testing.T, w, h vg.Length) Figure { return demoSection(t) }},
+		{name: "chance-stereonet", build: func(t *testing.T, w, h vg.Length) Figure { return demoChanceNet(t) }},
+		{name: "chance-sensitivity", build: func(t *testing.T, w, h vg.Length) Figure { return demoRankBars(t) }},
 	}
 }
 

@@ -3,6 +3,8 @@ package plots
 import (
 	"fmt"
 	"math"
+	"strconv"
+	"strings"
 
 	"gonum.org/v1/plot/vg"
 	"gonum.org/v1/plot/vg/draw"
@@ -21,99 +23,112 @@ type RankRow struct {
 // plane (the caller's order, least stable first), its inputs ranked by |ρ|,
 // each a bar from 0 towards −1 (the input lowers the factor of safety as it
 // rises: solid) or +1 (it raises it: outlined, hatched), with the value at
-// its end.
+// its end. It lays itself out on its canvas: when the bars do not all fit,
+// it shows fewer inputs per plane (those of largest |ρ|, down to three),
+// then fewer planes, and the key says so.
 type RankBars struct {
 	Site  string
 	Lines []string
 	Rows  []RankRow
 	// MaxInputs caps the bars per plane (0: all).
 	MaxInputs int
+
+	shown rankFit // what the last Draw showed
 }
 
 // Draw draws the figure on c.
 func (b *RankBars) Draw(c draw.Canvas) {
-	margin := vg.Points(12)
-	c = draw.Crop(c, margin, -margin, margin, -margin)
-	th := titleBlock(&c, append([]string{b.Site}, b.Lines...)) + vg.Points(8)
-	body := draw.Crop(c, 0, 0, 0, -th)
-	bars := 0
-	for _, r := range b.Rows {
-		bars += b.count(r)
-	}
-	if bars == 0 {
-		t := textStyle(9, false, ink)
-		c.FillText(t, vg.Point{X: body.Min.X, Y: body.Max.Y}, "No input varies: no rank correlation to show.")
+	title := append([]string{b.Site}, b.Lines...)
+	if b.bars(rankFit{len(b.Rows), math.MaxInt}) == 0 {
+		f := layFrame(c, title, &keyBox{}, netScore)
+		putText(&c, f.l.keyText(), f.main.Min.X, f.main.Max.Y, "No input varies: no rank correlation to show.")
+		f.drawText(&c)
 		return
 	}
-	headH := vg.Points(13)
-	avail := body.Max.Y - body.Min.Y - vg.Points(22) - headH*vg.Length(len(b.Rows))
-	barH := min(vg.Points(13), avail/vg.Length(bars))
-	nameW := vg.Points(150)
-	x0 := body.Min.X + nameW
-	x1 := body.Max.X - vg.Points(40)
-	mid := (x0 + x1) / 2
-	half := (x1 - x0) / 2
-	xAt := func(r float64) vg.Length { return mid + half*vg.Length(r) }
-	y := body.Max.Y
-	name := textStyle(7.5, false, ink)
-	name.XAlign, name.YAlign = draw.XRight, draw.YCenter
-	val := textStyle(7, false, ink)
-	val.YAlign = draw.YCenter
-	head := textStyle(8.5, true, ink)
-	sub := textStyle(7.5, false, grey)
-	axis := draw.LineStyle{Color: grey, Width: vg.Points(0.5)}
-	var ramp Ramp
-	dark, lightFill := ramp.At(0.12), ramp.At(0.85)
-	top := y
-	for _, r := range b.Rows {
-		c.FillText(head, vg.Point{X: body.Min.X, Y: y}, r.Plane)
-		c.FillText(sub, vg.Point{X: body.Min.X + vg.Points(8) + head.Width(r.Plane), Y: y - vg.Points(1)}, r.Detail)
-		y -= headH
-		for _, j := range b.order(r) {
-			yc := y - barH/2
-			c.FillText(name, vg.Point{X: x0 - vg.Points(6), Y: yc}, r.Inputs[j])
-			rho := r.Rho[j]
-			h := barH * 0.7
-			if math.IsNaN(rho) {
-				c.FillText(val, vg.Point{X: mid + vg.Points(4), Y: yc}, "undefined")
-			} else {
-				xa, xb := mid, xAt(rho)
-				if xb < xa {
-					xa, xb = xb, xa
-				}
-				box := []vg.Point{{X: xa, Y: yc - h/2}, {X: xb, Y: yc - h/2}, {X: xb, Y: yc + h/2}, {X: xa, Y: yc + h/2}, {X: xa, Y: yc - h/2}}
-				if rho < 0 {
-					c.FillPolygon(dark, box)
-				} else {
-					c.FillPolygon(lightFill, box)
-					for hx := xa + vg.Points(3); hx < xb; hx += vg.Points(4) {
-						c.StrokeLine2(draw.LineStyle{Color: ink, Width: vg.Points(0.4)}, hx, yc-h/2, min(hx+h, xb), yc+h/2)
-					}
-					c.StrokeLines(draw.LineStyle{Color: ink, Width: vg.Points(0.7)}, box)
-				}
-				v := val
-				at := xAt(rho) + vg.Points(3)
-				if rho < 0 {
-					v.XAlign = draw.XRight
-					at = xAt(rho) - vg.Points(3)
-				}
-				c.FillText(v, vg.Point{X: at, Y: yc}, signed2(rho))
-			}
-			y -= barH
+	// The key says what is left out, which depends on the room the key
+	// leaves: lay out again until they agree; what is drawn never grows
+	// past what the key says.
+	shown := b.all()
+	var f frame
+	for range 8 {
+		f = layFrameFrom(c, b.look(c.Rectangle), title, b.key(shown), b.score)
+		got, _ := b.fit(f.l, f.main)
+		if b.bars(got) >= b.bars(shown) {
+			break
+		}
+		shown = got
+	}
+	b.shown = shown
+	b.drawBars(&c, f.l, f.main, shown)
+	f.drawText(&c)
+}
+
+// drawBars draws the headings, names, bars and values of fit in main, and
+// the axis under them.
+func (b *RankBars) drawBars(c *draw.Canvas, l look, main vg.Rectangle, fit rankFit) {
+	name, _, _, line := rankLook(l)
+	val := l.tickText()
+	w := main.Max.X - main.Min.X
+	nameW := vg.Length(0)
+	for _, r := range b.Rows[:fit.planes] {
+		for _, j := range b.order(r)[:min(fit.inputs, b.count(r))] {
+			nameW = max(nameW, textWidth(name, r.Inputs[j]))
 		}
 	}
-	c.StrokeLine2(draw.LineStyle{Color: ink, Width: vg.Points(0.8)}, mid, top+vg.Points(2), mid, y)
-	tick := textStyle(7, false, ink)
-	tick.XAlign, tick.YAlign = draw.XCenter, draw.YTop
-	for _, t := range []float64{-1, -0.5, 0, 0.5, 1} {
-		xx := xAt(t)
-		c.StrokeLine2(axis, xx, y, xx, y-vg.Points(3))
-		c.FillText(tick, vg.Point{X: xx, Y: y - vg.Points(4)}, fmt.Sprintf("%g", t))
+	nameW = min(nameW, 0.4*w)
+	valW := textWidth(val, "−0.00")
+	x0 := main.Min.X + nameW + l.pt(6) + valW + l.pt(3)
+	x1 := main.Max.X - valW - l.pt(3)
+	mid, half := (x0+x1)/2, (x1-x0)/2
+	xAt := func(r float64) vg.Length { return mid + half*vg.Length(r) }
+	_, vh := textBox(val, "0")
+	_, nh := textBox(name, "X")
+	dark, lightFill := rankInk()
+	y := main.Max.Y
+	zero := draw.LineStyle{Color: ink, Width: vg.Points(0.8)}
+	for _, r := range b.Rows[:fit.planes] {
+		hl := b.headLines(l, r, w)
+		hl.draw(c, main.Min.X, y)
+		if len(hl.lines) == 1 && r.Detail != "" { // the detail beside the plane
+			_, head, detail, _ := rankLook(l)
+			_, hh := textBox(head, r.Plane)
+			_, dh := textBox(detail, r.Detail)
+			putText(c, detail, main.Min.X+textWidth(head, r.Plane)+l.pt(8), y-(hh-dh)/2, r.Detail)
+		}
+		y -= hl.height() + l.pt(4)
+		c.StrokeLine2(zero, mid, y, mid, y-vg.Length(min(fit.inputs, b.count(r)))*line)
+		for _, j := range b.order(r)[:min(fit.inputs, b.count(r))] {
+			yc := y - line/2
+			txt := fitText(name, r.Inputs[j], nameW)
+			putText(c, name, main.Min.X+nameW-textWidth(name, txt), yc+nh/2, txt)
+			rho := r.Rho[j]
+			if math.IsNaN(rho) {
+				putText(c, val, mid+l.pt(3), yc+vh/2, "undefined")
+			} else {
+				xa, xb := min(mid, xAt(rho)), max(mid, xAt(rho))
+				rankBar(c, xa, xb, yc, line*0.62, rho, dark, lightFill)
+				lbl := signed2(rho)
+				at := xAt(rho) + l.pt(3)
+				if rho < 0 {
+					at = xAt(rho) - l.pt(3) - textWidth(val, lbl)
+				}
+				putText(c, val, at, yc+vh/2, lbl)
+			}
+			y -= line
+		}
 	}
+	axis := draw.LineStyle{Color: grey, Width: vg.Points(0.5)}
 	c.StrokeLine2(axis, xAt(-1), y, xAt(1), y)
-	note := textStyle(7, false, grey)
-	note.XAlign = draw.XCenter
-	c.FillText(note, vg.Point{X: mid, Y: y - vg.Points(13)}, "Spearman's ρ with the factor of safety: solid, the input lowers FS as it rises; hatched, it raises FS")
+	ticks := []float64{-1, -0.5, 0, 0.5, 1}
+	if half/2 < textWidth(val, "−0.5")+l.pt(4) {
+		ticks = []float64{-1, 0, 1}
+	}
+	for _, t := range ticks {
+		xx := xAt(t)
+		c.StrokeLine2(axis, xx, y, xx, y-l.pt(3))
+		lbl := strings.Replace(strconv.FormatFloat(t, 'g', -1, 64), "-", "−", 1)
+		putText(c, val, xx-textWidth(val, lbl)/2, y-l.pt(3.5), lbl)
+	}
 }
 
 func (b *RankBars) count(r RankRow) int {
@@ -156,7 +171,3 @@ func signed2(v float64) string {
 	}
 	return "+" + s
 }
-
-// RankBarsHeight is a height for a chart of rows with at most maxInputs
-// bars each, cm.
-func RankBarsHeight(rows, bars int) float64 { return 3.6 + 0.46*float64(rows+bars) }

@@ -40,18 +40,23 @@ type TunnelSection struct {
 	Limit  float64 // zone depth limit beyond the wall, m
 	Outer  float64 // outer radius of the search, m from the axis
 	Zones  []SectionZone
+
+	dropped int // names left out for want of room, in the last Draw
 }
 
 // zoneInk are the colours of the sets' zones, of this project's own choice:
 // distinct in hue and in lightness, so the dashes and fills still part them
 // in grey print.
+// The tunnel profile draws its series in the same colours, in the same
+// order, so a plane keeps its colour from one tunnel figure to the next;
+// brick red comes last, away from the red of the FS = 1 line.
 var zoneInk = []color.NRGBA{
-	{R: 0xb0, G: 0x1c, B: 0x1c, A: 0xff}, // brick red
 	{R: 0x1f, G: 0x4e, B: 0x8c, A: 0xff}, // slate blue
 	{R: 0xa8, G: 0x74, B: 0x00, A: 0xff}, // ochre
 	{R: 0x2d, G: 0x6e, B: 0x4e, A: 0xff}, // moss green
 	{R: 0x5e, G: 0x3a, B: 0x87, A: 0xff}, // violet
 	{R: 0x55, G: 0x55, B: 0x55, A: 0xff}, // graphite
+	{R: 0xb0, G: 0x1c, B: 0x1c, A: 0xff}, // brick red
 }
 
 func zoneStyle(i int) (draw.LineStyle, color.NRGBA) {
@@ -73,16 +78,41 @@ func (t *TunnelSection) view() float64 {
 	return math.Min(t.Radius+d, t.Outer)
 }
 
+// sectionMarks are the compass of the section.
+var sectionMarks = []struct {
+	a   float64
+	txt string
+}{{0, "crown"}, {90, "right"}, {180, "invert"}, {270, "left"}}
+
+// sectionRoom returns the room kept beside and above the view for the
+// compass labels in look l.
+func sectionRoom(l look) (side, top vg.Length) {
+	for _, m := range sectionMarks {
+		side = max(side, textWidth(l.keyText(), m.txt))
+	}
+	_, h := textBox(l.keyText(), "0")
+	return side + l.pt(4), h + l.pt(4)
+}
+
+// sectionRadius is the radius of the view in main.
+func sectionRadius(l look, main vg.Rectangle) vg.Length {
+	side, top := sectionRoom(l)
+	return max(0, min((main.Max.X-main.Min.X)/2-side, (main.Max.Y-main.Min.Y)/2-top))
+}
+
 // Draw draws the figure on c.
 func (t *TunnelSection) Draw(c draw.Canvas) {
-	margin := vg.Points(12)
-	c = draw.Crop(c, margin, -margin, margin, -margin)
-	th := titleBlock(&c, append([]string{t.Site}, t.Lines...)) + vg.Points(6)
-	body := draw.Crop(c, 0, 0, 0, -th)
-	side := min(body.Max.X-body.Min.X-vg.Points(190), body.Max.Y-body.Min.Y)
-	cx, cy := body.Min.X+side/2, body.Max.Y-side/2
 	w := t.view()
-	k := float64(side) * 0.43 / w // canvas points per metre
+	f := layFrameOf(c, append([]string{t.Site}, t.Lines...), t.keys(w), func(l look, main vg.Rectangle) float64 { return float64(sectionRadius(l, main)) })
+	l := f.l
+	R := sectionRadius(l, f.main)
+	side, top := sectionRoom(l)
+	cx := f.main.Min.X + side + R
+	if f.below {
+		cx = (f.main.Min.X + f.main.Max.X) / 2
+	}
+	cy := f.main.Max.Y - top - R
+	k := float64(R) / w // canvas points per metre
 	pt := func(theta, r float64) vg.Point {
 		s, co := math.Sincos(theta * math.Pi / 180)
 		return vg.Point{X: cx + vg.Length(r*s*k), Y: cy + vg.Length(r*co*k)}
@@ -95,9 +125,47 @@ func (t *TunnelSection) Draw(c draw.Canvas) {
 		return out
 	}
 	// The rock within the view, and the opening.
-	c.FillPolygon(color.NRGBA{R: 0xfa, G: 0xf8, B: 0xf3, A: 0xff}, ring(w))
+	c.FillPolygon(rockFill, ring(w))
 	c.StrokeLines(draw.LineStyle{Color: light, Width: vg.Points(0.6), Dashes: []vg.Length{vg.Points(1), vg.Points(2)}}, ring(w))
-	// Joint traces: three parallel lines per set, in the rock only.
+	t.drawTraces(&c, cx, cy, k, w)
+	// Zones, clipped to the view.
+	for i, z := range t.Zones {
+		sty, fill := zoneStyle(i)
+		for _, lobe := range lobes(z, w) {
+			c.FillPolygon(fill, lobe.fill(pt))
+			for _, l := range lobe.edges(pt) {
+				c.StrokeLines(sty, l)
+			}
+		}
+	}
+	// The limit, the opening.
+	c.StrokeLines(limitRing, ring(t.Radius+t.Limit))
+	c.FillPolygon(color.NRGBA{R: 0xe8, G: 0xe8, B: 0xe6, A: 0xff}, ring(t.Radius))
+	c.StrokeLines(draw.LineStyle{Color: ink, Width: vg.Points(1.6)}, ring(t.Radius))
+
+	lab := &labeller{bounds: f.inner, pad: l.pt(1)}
+	lab.blockText(f.titleRect())
+	lab.blockText(f.keyRect())
+	lab.blockDisk(vg.Point{X: cx, Y: cy}, R+l.pt(1), l.pt(3))
+	for _, m := range sectionMarks {
+		lab.place(l.keyText(), m.txt, pt(m.a, w+1/k), l.pt(1), (90-m.a)*math.Pi/180, 8)
+	}
+	// The depths go on the rock: forget the disk, keep the texts.
+	lab.taken = append([]vg.Rectangle(nil), lab.texts...)
+	t.deepest(&c, lab, pt, l)
+	lab.draw(&c)
+	f.drawText(&c)
+	t.dropped = lab.dropped
+}
+
+var (
+	rockFill  = color.NRGBA{R: 0xfa, G: 0xf8, B: 0xf3, A: 0xff}
+	limitRing = draw.LineStyle{Color: ink, Width: vg.Points(0.8), Dashes: []vg.Length{vg.Points(4), vg.Points(2)}}
+)
+
+// drawTraces draws three parallel joint traces per set across the rock of
+// the view (w m from the axis), at k points per metre round (cx, cy).
+func (t *TunnelSection) drawTraces(c *draw.Canvas, cx, cy vg.Length, k, w float64) {
 	for i, z := range t.Zones {
 		if math.IsNaN(z.Trace) {
 			continue
@@ -116,33 +184,20 @@ func (t *TunnelSection) Draw(c draw.Canvas) {
 			}
 		}
 	}
-	// Zones, clipped to the view.
-	for i, z := range t.Zones {
-		sty, fill := zoneStyle(i)
-		for _, lobe := range lobes(z, w) {
-			c.FillPolygon(fill, lobe.fill(pt))
-			for _, l := range lobe.edges(pt) {
-				c.StrokeLines(sty, l)
-			}
-		}
-	}
-	// The limit, the opening, the compass of the section.
-	lim := t.Radius + t.Limit
-	c.StrokeLines(draw.LineStyle{Color: ink, Width: vg.Points(0.8), Dashes: []vg.Length{vg.Points(4), vg.Points(2)}}, ring(lim))
-	c.FillPolygon(color.NRGBA{R: 0xe8, G: 0xe8, B: 0xe6, A: 0xff}, ring(t.Radius))
-	c.StrokeLines(draw.LineStyle{Color: ink, Width: vg.Points(1.6)}, ring(t.Radius))
-	lab := textStyle(7.5, false, ink)
-	lab.XAlign, lab.YAlign = draw.XCenter, draw.YCenter
-	for _, m := range []struct {
+}
+
+// deepest marks the deepest point of each bounded zone, on every other set
+// at its twin 180° on (the zones are symmetric through the axis), with a
+// line from the wall, a dot and its depth, named through lab.
+func (t *TunnelSection) deepest(c *draw.Canvas, lab *labeller, pt func(theta, r float64) vg.Point, l look) {
+	w := t.view()
+	type mark struct {
+		i   int
 		a   float64
-		txt string
-	}{{0, "crown"}, {90, "right"}, {180, "invert"}, {270, "left"}} {
-		haloText(&c, lab, pt(m.a, w+6/k), m.txt)
+		tip vg.Point
 	}
-	// The deepest point of each bounded zone, on every other set at its twin
-	// 180° on (the zones are symmetric through the axis), labels pushed
-	// outward along the ray until they clear the ones placed before.
-	var placed []vg.Point
+	var marks []mark
+	dot := l.pt(2)
 	for i, z := range t.Zones {
 		if math.IsNaN(z.Depth) {
 			continue
@@ -150,76 +205,15 @@ func (t *TunnelSection) Draw(c draw.Canvas) {
 		a := z.Angle + 180*float64(i%2)
 		sty, _ := zoneStyle(i)
 		sty.Dashes = nil
-		tip := math.Min(t.Radius+z.Depth, w)
-		c.StrokeLines(sty, []vg.Point{pt(a, t.Radius), pt(a, tip)})
-		c.DrawGlyph(draw.GlyphStyle{Color: sty.Color, Radius: vg.Points(2), Shape: draw.CircleGlyph{}}, pt(a, tip))
-		nl := textStyle(7, true, sty.Color)
-		nl.XAlign, nl.YAlign = draw.XCenter, draw.YCenter
-		at := pt(a, tip+9/k)
-		for r := tip + 9/k; clash(at, placed); r += 6 / k {
-			at = pt(a, r)
-		}
-		placed = append(placed, at)
-		haloText(&c, nl, at, fmt.Sprintf("%s %.2f m", z.Name, z.Depth))
+		tip := pt(a, math.Min(t.Radius+z.Depth, w))
+		c.StrokeLines(sty, []vg.Point{pt(a, t.Radius), tip})
+		c.DrawGlyph(draw.GlyphStyle{Color: sty.Color, Radius: dot, Shape: draw.CircleGlyph{}}, tip)
+		lab.block(square(tip, dot))
+		marks = append(marks, mark{i, a, tip})
 	}
-	t.key(&c, body.Min.X+side+vg.Points(14), body.Max.Y, w)
-}
-
-// clash reports whether a label centred at p would overlap one centred at
-// any of the points placed (labels about 44 × 9 points).
-func clash(p vg.Point, placed []vg.Point) bool {
-	for _, q := range placed {
-		if math.Abs(float64(p.X-q.X)) < 46 && math.Abs(float64(p.Y-q.Y)) < 10 {
-			return true
-		}
-	}
-	return false
-}
-
-// key draws the key from (x, y) down.
-func (t *TunnelSection) key(c *draw.Canvas, x, y vg.Length, w float64) {
-	head := textStyle(8, true, ink)
-	c.FillText(head, vg.Point{X: x, Y: y}, "zones of potential slip")
-	y -= vg.Points(16)
-	note := textStyle(7.5, false, ink)
-	note.YAlign = draw.YCenter
-	small := textStyle(7, false, grey)
-	small.YAlign = draw.YCenter
-	for i, z := range t.Zones {
-		sty, fill := zoneStyle(i)
-		box := []vg.Point{{X: x, Y: y - vg.Points(4)}, {X: x + vg.Points(16), Y: y - vg.Points(4)}, {X: x + vg.Points(16), Y: y + vg.Points(4)}, {X: x, Y: y + vg.Points(4)}}
-		c.FillPolygon(fill, box)
-		c.StrokeLines(sty, append(box, box[0]))
-		c.FillText(textStyle(7.5, true, ink), vg.Point{X: x + vg.Points(22), Y: y + vg.Points(4)}, z.Name)
-		y -= vg.Points(11)
-		for _, l := range z.Note {
-			c.FillText(note, vg.Point{X: x + vg.Points(22), Y: y}, l)
-			y -= vg.Points(10)
-		}
-		trace := "no trace: the plane is the section"
-		if !math.IsNaN(z.Trace) {
-			dip, side := z.Trace, "left"
-			if dip > 90 {
-				dip, side = 180-dip, "right"
-			}
-			trace = fmt.Sprintf("trace dips %.0f° to the %s", dip, side)
-		}
-		c.FillText(small, vg.Point{X: x + vg.Points(22), Y: y}, trace)
-		y -= vg.Points(15)
-	}
-	y -= vg.Points(4)
-	c.StrokeLine2(draw.LineStyle{Color: ink, Width: vg.Points(0.8), Dashes: []vg.Length{vg.Points(4), vg.Points(2)}}, x, y, x+vg.Points(16), y)
-	c.FillText(note, vg.Point{X: x + vg.Points(22), Y: y}, fmt.Sprintf("limit %.2g m beyond the wall", t.Limit))
-	y -= vg.Points(13)
-	for _, l := range []string{
-		"looking along the drive, crown up",
-		"filled: critical (FS ≤ 1) or opening (σn' ≤ 0)",
-		"  under the stress in the rock",
-		"thin lines: joint traces at their apparent dip",
-		"line with a dot: deepest point of a bounded zone",
-		fmt.Sprintf("shown to %.1f m beyond the wall (dotted ring)", w-t.Radius),
-	} {
-		c.FillText(small, vg.Point{X: x, Y: y}, l)
-		y -= vg.Points(11)
+	for _, m := range marks {
+		z := t.Zones[m.i]
+		sty, _ := zoneStyle(m.i)
+		lab.place(l.text(7, 5.5, true, sty.Color), fmt.Sprintf("%s %.2f m", z.Name, z.Depth), m.tip, dot, (90-m.a)*math.Pi/180, 16)
 	}
 }

@@ -228,7 +228,6 @@ func (ch *chances) figures(a *screened) []*namedFigure {
 		d := out.Odds[i]
 		bars.Rows = append(bars.Rows, plots.RankRow{Plane: ch.targets[i].Plane.Name, Detail: fmt.Sprintf("P(unstable) %s, FS %s to %s (5 to 95 %%)", words.Proportion(d.PUnstable, d.StdErr), words.Fixed(d.FS[0], 2), words.Fixed(d.FS[2], 2)), Inputs: out.Inputs, Rho: d.Rho})
 	}
-	h := plots.RankBarsHeight(len(bars.Rows), len(bars.Rows)*min(8, len(out.Inputs)))
 	return []*namedFigure{
 		{file: "chance-stereonet",
 			title:   fmt.Sprintf("Probability that each orientation is critical or opening at %g m", ch.depth),
@@ -237,7 +236,7 @@ func (ch *chances) figures(a *screened) []*namedFigure {
 		{file: "chance-sensitivity",
 			title:   "Which uncertain input drives the verdict",
 			caption: "For the least stable planes and set means, Spearman's rank correlation between each varied input and the plane's factor of safety over the realisations, largest first. A solid bar to the left: the factor of safety falls as the input rises; a hatched bar to the right: it rises. An input of one plane (planes.NAME.…) correlates with that plane only.",
-			fig:     bars, w: cm(19, 0), h: cm(h, 0)},
+			fig:     bars, w: cm(19, 0), h: bars.Height(cm(19, 0))},
 	}
 }
 

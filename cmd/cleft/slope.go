@@ -3,6 +3,7 @@ package main
 import (
 	"fmt"
 	"io"
+	"math"
 	"strings"
 
 	"cleft/planes/site"
@@ -131,7 +132,7 @@ func kinematicNet(siteName string, sc *slope.Screening) *plots.KinematicNet {
 	for _, c := range sc.Cases {
 		switch {
 		case c.Test == slope.PlanarTest:
-			k.Items = append(k.Items, plots.KinItem{Name: sc.Names(c), Line: c.Line, Feasible: c.Feasible, Toppling: topple[c.A], Fails: c.Fails})
+			k.Items = append(k.Items, plots.KinItem{Name: sc.Names(c), Line: c.Line, Feasible: c.Feasible, Toppling: topple[c.A], Fails: c.Fails, FS: leastFS(c.FS)})
 		case c.Test == slope.WedgeTest && c.HasLine:
 			if !c.Feasible {
 				if grey == maxGreyWedges {
@@ -140,7 +141,7 @@ func kinematicNet(siteName string, sc *slope.Screening) *plots.KinematicNet {
 				}
 				grey++
 			}
-			k.Items = append(k.Items, plots.KinItem{Name: sc.Names(c), Line: c.Line, Intersection: true, Feasible: c.Feasible, Fails: c.Fails, OnePlane: c.Feasible && (c.Mode == slope.WedgeOnFirst || c.Mode == slope.WedgeOnSecond)})
+			k.Items = append(k.Items, plots.KinItem{Name: sc.Names(c), Line: c.Line, Intersection: true, Feasible: c.Feasible, Fails: c.Fails, FS: leastFS(c.FS), OnePlane: c.Feasible && (c.Mode == slope.WedgeOnFirst || c.Mode == slope.WedgeOnSecond)})
 		}
 	}
 	if hidden > 0 {
@@ -149,11 +150,23 @@ func kinematicNet(siteName string, sc *slope.Screening) *plots.KinematicNet {
 	return k
 }
 
+// leastFS is the least defined factor of safety of a case over its water
+// cases, NaN when none is: the kinematic net names the least first.
+func leastFS(fs []float64) float64 {
+	least := math.NaN()
+	for _, v := range fs {
+		if !math.IsNaN(v) && !(v >= least) {
+			least = v
+		}
+	}
+	return least
+}
+
 // slopeFigure is the kinematic stereonet of the slope screening.
 func slopeFigure(siteName string, sc *slope.Screening) *namedFigure {
 	sl := sc.Slope
 	return &namedFigure{file: "slope-kinematic",
 		title:   fmt.Sprintf("Kinematic screening of the %s face", sl.Face),
-		caption: fmt.Sprintf("Lower-hemisphere equal-area net of lines: dip vectors of the planes (circles) and lines of intersection of every pair (diamonds). A line daylights when it plots beyond the face's great circle and can slide when it also lies inside the friction circle (φ = %.1f°). Densely hatched and outlined: the planar sliding zone within ±%g° of the face's dip direction; sparsely hatched across it: the wedge sliding zone; hatched level in the light tone: the flexural toppling envelope (±%g°). Large pale symbols with a heavy outline are the cases that can fail, named (triangle: planar sliding; downward triangle: flexural toppling; diamond: wedge sliding, its mode from the normal reactions of the block, barred when it slides on one plane alone and is then tested by that plane's dip, so that its line may lie outside the zones); small ones are held back, their fill saying by what (white: does not daylight; mid tone: flatter than φ; dark: only the lateral limit).", sl.FrictionAngle, sl.LateralLimit, sl.ToppleLimit),
+		caption: fmt.Sprintf("Lower-hemisphere equal-area net of lines: dip vectors of the planes (circles) and lines of intersection of every pair (diamonds). A line daylights when it plots beyond the face's great circle and can slide when it also lies inside the friction circle (φ = %.1f°). Densely hatched and outlined: the planar sliding zone within ±%g° of the face's dip direction; sparsely hatched across it: the wedge sliding zone; hatched level in the light tone: the flexural toppling envelope (±%g°). Large pale symbols with a heavy outline are the cases that can fail, named (triangle: planar sliding; downward triangle: flexural toppling; diamond: wedge sliding, its mode from the normal reactions of the block, barred when it slides on one plane alone and is then tested by that plane's dip, so that its line may lie outside the zones); small ones are held back, their fill saying by what (white: does not daylight; mid tone: flatter than φ; dark: only the lateral limit). The cases that can fail are named least factor of safety first (the least over the water cases); when there are more than the net has room for, the key says how many are not named (every case is in slope.csv).", sl.FrictionAngle, sl.LateralLimit, sl.ToppleLimit),
 		fig:     kinematicNet(siteName, sc), w: cm(19, 0), h: cm(13.5, 0)}
 }

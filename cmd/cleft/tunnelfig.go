@@ -39,7 +39,7 @@ func tunnelFigures(s *site.Site, sc *tunnel.Screening, section, wall int) []*nam
 	return []*namedFigure{
 		{file: "tunnel-profile",
 			title:   "Along the tunnel alignment",
-			caption: fmt.Sprintf("Top: cover above the crown. Second: the largest boundary stress at the wall against the UCS, with the band of the onset of spalling, 0.4 ± 0.1 (Martin, Kaiser & McCreath 1999). Third: far-field factor of safety of each plane or set at the axis depth, each with its own strength (values above 4 are drawn at 4); the dotted red line is FS = 1. Bottom: the greatest depth beyond the wall of each one's zone of potential slip in the rock round the opening, against the zone depth limit of %s m (dashed red). Shading: stretches where a plane is critical or opening in the far field (darker; there its zone has no bound, and the bottom panel shows the depth found near the opening) or slips or opens somewhere on the wall (lighter).", words.Num(t.Limit())),
+			caption: fmt.Sprintf("Panels over the chainage, top down. Cover above the crown. The largest boundary stress at the wall against the UCS, with the band of the onset of spalling, 0.4 ± 0.1 (Martin, Kaiser & McCreath 1999). The far-field factor of safety of each plane or set at the axis depth, each with its own strength, on a logarithmic scale (values beyond its ends are drawn at the end as open triangles, and the key says so); the dotted red line is FS = 1. The greatest depth beyond the wall of each one's zone of potential slip in the rock round the opening, against the zone depth limit of %s m (dashed red), shaded where some plane is critical or opening in the far field: there its zone has no bound, and the panel shows the depth found near the opening. Last, one lane per plane or set: dark where it is critical or opening in the far field, light where only somewhere on the wall. Each plane or set has its own colour (the same as on the cross-section), dashes and marker, its markers at stations of its own, so that series on the same values still show apart.", words.Num(t.Limit())),
 			fig:     pr, w: cm(19, 0), h: cm(24, 0)},
 		sectionFigure(s, sc, section),
 		wallFigure(s, sc, wall),
@@ -78,7 +78,7 @@ func sectionFigure(s *site.Site, sc *tunnel.Screening, i int) *namedFigure {
 	}
 	return &namedFigure{file: "tunnel-section",
 		title:   fmt.Sprintf("Zones of potential slip round the opening at chainage %g m", ts.Chainage),
-		caption: "Looking along the drive, crown up. Each filled, outlined region is where a plane or set, with its own strength, is critical (FS ≤ 1) or opening (σn' ≤ 0) under the full elastic stress in the rock round a circular opening (Kirsch 1898, with the anti-plane terms) and the pore pressure of the wall's rule; the zones of the sets overlap where they share rock. Thin lines are the traces of each set across the section at its apparent dip. A line with a dot marks the deepest point of each zone whose depth is known, with that depth beyond the wall; the dashed ring is the zone depth limit. " + words.ZoneCaution,
+		caption: "Looking along the drive, crown up. Each filled, outlined region is where a plane or set, with its own strength, is critical (FS ≤ 1) or opening (σn' ≤ 0) under the full elastic stress in the rock round a circular opening (Kirsch 1898, with the anti-plane terms) and the pore pressure of the wall's rule; the zones of the sets overlap where they share rock. Thin lines are the traces of each set across the section at its apparent dip. A line with a dot marks the deepest point of each zone whose depth is known, with that depth beyond the wall; the dashed ring is the zone depth limit. Each plane or set keeps its colour on the along-alignment chart. " + words.ZoneCaution,
 		fig:     f, w: cm(19, 0), h: cm(13, 0)}
 }
 
@@ -108,6 +108,6 @@ func wallFigure(s *site.Site, sc *tunnel.Screening, i int) *namedFigure {
 	}
 	return &namedFigure{file: "tunnel-wall",
 		title:   fmt.Sprintf("Wall of the opening at chainage %g m", ts.Chainage),
-		caption: "Looking along the drive, crown up. The curve is the tangential stress σθ round the wall (Kirsch 1898, with the out-of-plane terms of Hiramatsu & Oka 1962), compression outward. Each ring is a plane or set: solid red arcs are where the wall stress resolved on it reaches its strength, dashed blue arcs where it opens.",
+		caption: "Looking along the drive, crown up. The curve is the tangential stress σθ round the wall (Kirsch 1898, with the out-of-plane terms of Hiramatsu & Oka 1962), compression outward. Each ring is a plane or set, named outside the rings, inner to outer in the key's order: solid red arcs are where the wall stress resolved on it reaches its strength, dashed blue arcs where it opens.",
 		fig:     wall, w: cm(19, 0), h: cm(13, 0)}
 }
