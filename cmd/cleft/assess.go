@@ -52,6 +52,7 @@ frictional-limit check of the stress model.
 Files that an earlier assess wrote into DIR (named in its manifest.json)
 and this run does not write are removed, when they are unchanged since;
 nothing else in DIR is touched.
+
 --example uses the invented demo site built into cleft (see cleft example).
 
 ` + caution,
@@ -163,7 +164,7 @@ func runAssess(o assessOptions, stdout, stderr io.Writer) error {
 	dec := a.decide(ch)
 	rep := a.report(o.example, facts, figs, o.allFigures)
 	rep.Summary = dec.lead(facts, ch)
-	rep.LookFirst, rep.LookRule, rep.More = words.LookFirst(dec.top), words.LookFirstRule, words.More(dec.more)
+	rep.LookFirst, rep.LookRule, rep.RankRule, rep.More = words.LookFirst(dec.top), words.LookFirstBrief, words.LookFirstRule, words.More(dec.more)
 	rep.Checks = []string{words.Limit(facts)}
 	rep.Readings = a.readingsTable(o.readings)
 	if ch != nil {

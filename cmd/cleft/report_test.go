@@ -252,11 +252,23 @@ func TestReportInBrowser(t *testing.T) {
 	if err != nil {
 		t.Fatalf("printed PDF: %v", err)
 	}
-	// Header, summary and inputs; stress; 139 plane rows (about 45 a page);
-	// sets and slope; five figures; method and limitations: at least eight
-	// pages, and not a runaway layout.
-	if n := r.NumPage(); n < 8 || n > 24 {
-		t.Errorf("printed PDF has %d pages (%d bytes), want 8 to 24", n, st.Size())
+	// Header and summary; the key table, inputs and stress; slope, tunnel
+	// and chance; five figures two to a page (the tall chart alone); method,
+	// limitations and the appendix: not fewer than five pages, and not a
+	// runaway layout (the readings are not listed one by one).
+	if n := r.NumPage(); n < 5 || n > 14 {
+		t.Errorf("printed PDF has %d pages (%d bytes), want 5 to 14", n, st.Size())
+	}
+	// Nothing is wider than the page: a browser shrinks the whole report
+	// to fit its widest table, and the title (1.55rem, 16 px to the rem:
+	// 24.8 px = 18.6 pt) would print smaller.
+	const tol = 0.2 // pt
+	title := 0.0
+	for _, tx := range r.Page(1).Content().Text {
+		title = max(title, tx.FontSize)
+	}
+	if title < 18.6-tol {
+		t.Errorf("the title prints at %.2f pt, not 18.6: the report was shrunk to fit a table wider than the page", title)
 	}
 }
 

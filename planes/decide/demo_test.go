@@ -14,7 +14,7 @@ import (
 	"cleft/planes/tunnel"
 )
 
-func demoScreenings(t *testing.T) decide.Screenings {
+func demoScreenings(t testing.TB) decide.Screenings {
 	t.Helper()
 	s, err := site.ParseFS(demo.FS, demo.Site)
 	if err != nil {

@@ -21,10 +21,12 @@ type Report struct {
 	Model     string   // the model in one line
 	Summary   []string // the plain-words summary, one sentence each
 	// LookFirst are the findings to look at first, ranked, one sentence
-	// each, after LookRule (how they are ranked) and before More (what is
-	// left out) and Checks (the frictional-limit check).
+	// each, after LookRule (how they are ranked, in brief; in full in the
+	// method, RankRule) and before More (what is left out) and Checks (the
+	// frictional-limit check).
 	LookFirst []string
 	LookRule  string
+	RankRule  string
 	More      string
 	Checks    []string
 	Params    []Param

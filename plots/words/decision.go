@@ -9,6 +9,10 @@ import (
 	"cleft/planes/decide"
 )
 
+// LookFirstBrief says in one line how the findings to look at first are
+// ranked; LookFirstRule says it in full.
+const LookFirstBrief = "Ranked across the planes, the joint sets, the slope and the tunnel by how near each is to its limit: what fails now first, then what is near it (the rule is under Method)."
+
 // LookFirstRule says how the findings to look at first are ranked
 // (decide.Rank).
 const LookFirstRule = "Ranked across the planes, the joint sets, the slope and the tunnel by how near each is to its limit: " +
@@ -62,7 +66,7 @@ func More(n int) string {
 		return ""
 	}
 	if n == 1 {
-		return "1 more finding near or past its limit is not listed: see the key table and the sections below."
+		return "1 more finding near or past its limit is not listed: see the sections below."
 	}
 	return fmt.Sprintf("%d more findings near or past their limits are not listed: see the key table and the sections below.", n)
 }
