@@ -165,6 +165,9 @@ func runAssess(o assessOptions, stdout, stderr io.Writer) error {
 	rep := a.report(o.example, facts, figs, o.allFigures)
 	rep.Summary = dec.lead(facts, ch)
 	rep.LookFirst, rep.LookRule, rep.RankRule, rep.More = words.LookFirst(dec.top), words.LookFirstBrief, words.LookFirstRule, words.More(dec.more)
+	if q := words.Quiet(dec.top); q != "" {
+		rep.LookRule += " " + q
+	}
 	rep.Checks = []string{words.Limit(facts)}
 	rep.Readings = a.readingsTable(o.readings)
 	if ch != nil {

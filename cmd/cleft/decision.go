@@ -64,6 +64,9 @@ func (d *decision) print(b *strings.Builder, f assess.Facts, ch *chances) {
 		b.WriteString(words.Wrap(l, 88) + "\n")
 	}
 	b.WriteString("\nLook at these first:\n")
+	if q := words.Quiet(d.top); q != "" {
+		b.WriteString("    " + q + "\n")
+	}
 	for i, l := range words.LookFirst(d.top) {
 		lead := fmt.Sprintf("%2d. ", i+1)
 		b.WriteString(lead + strings.ReplaceAll(words.Wrap(l, 84), "\n", "\n    ") + "\n")

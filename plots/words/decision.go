@@ -59,6 +59,16 @@ func Screened(f assess.Facts, sl *decide.SlopeSummary, tn *decide.TunnelSummary)
 	return out
 }
 
+// Quiet is "" when the first of the ranked findings fails or is near its
+// limit, else a sentence that says none is and the list holds the least
+// stable.
+func Quiet(top []decide.Finding) string {
+	if len(top) == 0 || top[0].Standing >= decide.Near {
+		return ""
+	}
+	return "Nothing fails or is near its limit; the least stable are listed."
+}
+
 // More says how many findings near or past their limits the list leaves
 // out, or "".
 func More(n int) string {
