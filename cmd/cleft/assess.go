@@ -16,10 +16,12 @@ import (
 )
 
 type assessOptions struct {
-	site    string
-	example bool
-	out     string
-	warn    io.Writer // standard error, for warnings
+	site       string
+	example    bool
+	out        string
+	readings   bool      // list every field reading in the report's appendix
+	allFigures bool      // draw every figure in the report
+	warn       io.Writer // standard error, for warnings
 }
 
 func newAssessCmd() *cobra.Command {
@@ -39,9 +41,18 @@ func newAssessCmd() *cobra.Command {
   with slope:               slope.csv, slope-kinematic.svg/.png (see cleft slope);
                             with readings also slope-readings.csv
   with tunnel:              stations.csv, wall.csv, profile.csv, zones.csv, tunnel-*.svg/.png
+  with cases: or uncertainty:  the outputs of cleft chance
+  manifest.json             every file written, with its SHA-256
 
-and prints a short summary: how many planes are critical or opening, the
-least stable three, and the frictional-limit check of the stress model.
+and prints a short summary: what was screened, the findings to look at
+first (planes, set means, readings, slope cases, tunnel stretches and their
+probabilities, ranked by how near each is to its limit), and the
+frictional-limit check of the stress model.
+
+Files that an earlier assess wrote into DIR (named in its manifest.json)
+and this run does not write are removed, when they are unchanged since;
+nothing else in DIR is touched.
+
 --example uses the invented demo site built into cleft (see cleft example).
 
 ` + caution,
@@ -56,6 +67,8 @@ least stable three, and the frictional-limit check of the stress model.
 	}
 	c.Flags().BoolVar(&o.example, "example", false, "assess the built-in demo site (invented data)")
 	c.Flags().StringVar(&o.out, "out", "", "output folder (created if missing)")
+	c.Flags().BoolVar(&o.readings, "report-readings", false, "list every field reading in the report's appendix (default: one row per set)")
+	c.Flags().BoolVar(&o.allFigures, "report-figures", false, "draw every figure in the report (default: the key figures; every figure is a file in DIR)")
 	return c
 }
 
@@ -148,19 +161,31 @@ func runAssess(o assessOptions, stdout, stderr io.Writer) error {
 		return err
 	}
 	facts := a.Facts()
-	rep := a.report(o.example, facts, figs)
+	dec := a.decide(ch)
+	rep := a.report(o.example, facts, figs, o.allFigures)
+	rep.Summary = dec.lead(facts, ch)
+	rep.LookFirst, rep.LookRule, rep.RankRule, rep.More = words.LookFirst(dec.top), words.LookFirstBrief, words.LookFirstRule, words.More(dec.more)
+	if q := words.Quiet(dec.top); q != "" {
+		rep.LookRule += " " + q
+	}
+	rep.Checks = []string{words.Limit(facts)}
+	rep.Readings = a.readingsTable(o.readings)
 	if ch != nil {
 		rep.Chance = ch.reportTable(a)
-		rep.Summary = append(rep.Summary, ch.summary()...)
 	}
 	if err := out.tables(
 		namedTable{"report.html", rep.WriteHTML},
-		namedTable{"summary.json", func(w io.Writer) error { return writeJSON(w, newSummaryDoc(s.Name, facts)) }},
+		namedTable{"summary.json", func(w io.Writer) error { return writeJSON(w, newSummaryDoc(s.Name, facts, a, dec, ch)) }},
 	); err != nil {
 		return err
 	}
+	removed, kept, err := out.manifest(siteInputs(s))
+	if err != nil {
+		return err
+	}
 	var b strings.Builder
-	printSummary(&b, s, facts)
+	printHead(&b, s)
+	dec.print(&b, facts, ch)
 	if a.slope != nil {
 		b.WriteString("\n")
 		printSlope(&b, a.slope, a.counts)
@@ -173,7 +198,9 @@ func runAssess(o assessOptions, stdout, stderr io.Writer) error {
 		b.WriteString("\n")
 		ch.print(&b, a)
 	}
-	fmt.Fprintf(&b, "\nWrote %d files to %s: %s.\n\n%s\n", len(out.wrote), o.out, strings.Join(out.names(), ", "), caution)
+	fmt.Fprintf(&b, "\nWrote %d files to %s: %s.\n", len(out.wrote), o.out, strings.Join(out.names(), ", "))
+	printTidied(&b, removed, kept)
+	fmt.Fprintf(&b, "\n%s\n", caution)
 	_, err = io.WriteString(stdout, b.String())
 	return err
 }
@@ -195,17 +222,13 @@ func planeTable(w io.Writer, a *assess.Assessment, f table.Format) error {
 	return err
 }
 
-// printSummary prints the site, its model, notes and the summary sentences.
-func printSummary(b *strings.Builder, s *site.Site, f assess.Facts) {
+// printHead prints the site, its model and notes.
+func printHead(b *strings.Builder, s *site.Site) {
 	fmt.Fprintf(b, "%s\nModel: %s\n", s.Name, s.Summary())
 	for _, n := range s.Notes {
 		fmt.Fprintf(b, "Note: %s\n", n)
 	}
 	b.WriteString("\n")
-	for _, l := range words.Summary(f) {
-		b.WriteString(words.Wrap(l, 88))
-		b.WriteString("\n")
-	}
 }
 
 // assessFor loads and assesses the site at path, which must have the block

@@ -161,10 +161,6 @@ func (ch *chances) print(b *strings.Builder, a *screened) {
 	}
 }
 
-// summary are the sentences of the cases and the Monte Carlo for the
-// report's summary.
-func (ch *chances) summary() []string { return words.ChanceLines(ch.targets, ch.runs, ch.out) }
-
 // lines are the sentences of the cases, the Monte Carlo, the slope and the
 // tunnel.
 func (ch *chances) lines(a *screened) []string {
@@ -240,14 +236,24 @@ func (ch *chances) figures(a *screened) []*namedFigure {
 	}
 }
 
+// maxChanceRows is the most planes the report's table of the cases and
+// the Monte Carlo lists: the least sure; chance.csv has them all.
+const maxChanceRows = 6
+
 // reportTable is the report's section on the cases and the Monte Carlo.
 func (ch *chances) reportTable(a *screened) *report.Table {
-	t := &report.Table{Notes: ch.lines(a)}
-	t.Notes = append(t.Notes, "The least sure planes and set means, least sure first (every one of them is in chance.csv and cases.csv). P(unstable) is the share of realisations in which the plane is critical or opening, ± its standard error (P(critical) and P(opening) apart are in chance.csv); “—” where there is no Monte Carlo or the percentile falls on an opening realisation. These probabilities are no better than the distributions given for the inputs.")
+	t := &report.Table{Notes: words.ChanceOverview(ch.targets, ch.runs, ch.out)}
+	if ch.out != nil && a.slope != nil && ch.out.Slope != nil {
+		t.Notes = append(t.Notes, words.SlopeChanceLines(a.slope, ch.out)...)
+	}
+	if ch.out != nil && a.tunnel != nil && ch.out.Tunnel != nil {
+		t.Notes = append(t.Notes, words.TunnelChanceLines(a.tunnel, ch.out)...)
+	}
+	t.Notes = append(t.Notes, "The least sure planes and set means, least sure first (every one of them is in chance.csv and cases.csv, the rank correlations in sensitivity.csv). P(unstable) is the share of realisations in which the plane is critical or opening, ± its standard error (P(critical) and P(opening) apart are in chance.csv); “—” where there is no Monte Carlo or the percentile falls on an opening realisation. These probabilities are no better than the distributions given for the inputs.")
 	t.Columns = []string{"plane", "dip/dip dir.", "depth m", "base", "cases unstable", "P(unstable)", "FS 5 %", "FS 50 %", "FS 95 %", "robust", "driver (ρ)"}
 	t.Numeric = []bool{false, true, true, false, true, true, true, true, true, false, false}
 	t.NoWrap = []bool{0: true, 3: true, 5: true}
-	for _, i := range words.ChanceOrder(ch.targets, ch.runs, ch.out)[:min(15, len(ch.targets))] {
+	for _, i := range words.ChanceOrder(ch.targets, ch.runs, ch.out)[:min(maxChanceRows, len(ch.targets))] {
 		tg := &ch.targets[i]
 		row := []string{tg.Plane.Name, tg.Plane.Orientation.String(), words.Num(tg.Plane.Depth), words.StateLabel(tg.Base.State), "—", "—", "—", "—", "—", "—", "—"}
 		if len(ch.runs) > 1 {

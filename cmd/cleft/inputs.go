@@ -80,7 +80,7 @@ func chanceFiles() []string {
 }
 
 func assessFiles() []string {
-	out := []string{"planes.csv", "planes.json", "stress.json", "report.html", "summary.json", "sets.csv"}
+	out := []string{"planes.csv", "planes.json", "stress.json", "report.html", "summary.json", "sets.csv", manifestName}
 	out = append(out, figureFiles("stereonet-slip", "stereonet-dilation", "mohr", "sets-density")...)
 	out = append(out, slopeFiles()...)
 	out = append(out, chanceFiles()...)

@@ -106,7 +106,7 @@ func TestAssessExample(t *testing.T) {
 	if code != 0 {
 		t.Fatalf("exit %d: %s", code, stderr)
 	}
-	for _, want := range []string{"139 planes were screened", "1 is critical", "1 is opening", "137 are stable", "3 sets", "1 planar, 3 wedge", "The least stable are F2", "frictional-limit check", "not a substitute"} {
+	for _, want := range []string{"139 planes were screened", "1 is critical", "1 is opening", "137 are stable", "3 sets", "1 planar, 3 wedge", "Look at these first:\n 1. F2 (80/038 at 150 m): opening", "frictional-limit check", "not a substitute"} {
 		if !strings.Contains(out, want) {
 			t.Errorf("summary lacks %q:\n%s", want, out)
 		}
@@ -129,7 +129,7 @@ func TestAssessExample(t *testing.T) {
 	if len(sets) != 5 || sets[1][0] != "S1" || sets[4][0] != "unassigned" {
 		t.Errorf("sets.csv: %v", sets)
 	}
-	for _, name := range []string{"planes.csv", "planes.json", "stress.json", "sets.csv"} {
+	for _, name := range []string{"planes.csv", "planes.json", "stress.json", "sets.csv", "summary.json", "manifest.json"} {
 		data, _ := os.ReadFile(filepath.Join(dir, name))
 		for _, bad := range []string{"NaN", "Inf"} {
 			if bytes.Contains(data, []byte(bad)) {

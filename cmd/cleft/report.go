@@ -3,6 +3,7 @@ package main
 import (
 	"fmt"
 	"math"
+	"slices"
 	"strings"
 	"time"
 
@@ -18,14 +19,13 @@ import (
 var now = time.Now
 
 // report builds the effective-stress report of the assessment.
-func (a *screened) report(example bool, facts assess.Facts, figs []*namedFigure) *report.Report {
+func (a *screened) report(example bool, facts assess.Facts, figs []*namedFigure, allFigures bool) *report.Report {
 	s := a.Site
 	r := &report.Report{
 		Site:      s.Name,
 		Generated: now().UTC().Format("2006-01-02 15:04 MST"),
 		Version:   version,
 		Model:     s.Summary(),
-		Summary:   words.Summary(facts),
 		Notes:     s.Notes,
 		Criterion: s.Criterion.String(),
 		Caution:   strings.TrimPrefix(caution, "Caution: "),
@@ -43,9 +43,29 @@ func (a *screened) report(example bool, facts assess.Facts, figs []*namedFigure)
 	for _, z := range a.ReportDepths() {
 		r.States = append(r.States, reportState(s.Model.At(z), mu))
 	}
-	r.Planes, r.BySet = a.planeTable()
+	r.Planes, r.BySet = a.keyTable(), true
+	var others []string
 	for _, f := range figs {
-		r.Figures = append(r.Figures, report.Figure{Title: f.title, Caption: f.caption, SVG: f.svg})
+		if !allFigures && !slices.Contains(keyFigures, f.file) {
+			others = append(others, fmt.Sprintf("%s (%s)", f.file, strings.ToLower(f.title[:1])+f.title[1:]))
+		}
+	}
+	for _, name := range keyFigures { // in the order of the report's sections
+		for _, f := range figs {
+			if f.file == name {
+				r.Figures = append(r.Figures, report.Figure{Title: f.title, Caption: f.caption, SVG: f.svg})
+			}
+		}
+	}
+	if allFigures {
+		for _, f := range figs {
+			if !slices.Contains(keyFigures, f.file) {
+				r.Figures = append(r.Figures, report.Figure{Title: f.title, Caption: f.caption, SVG: f.svg})
+			}
+		}
+	}
+	if len(others) > 0 {
+		r.FiguresNote = "Also drawn, as SVG and PNG files in the output folder (cleft assess --report-figures draws them here too): " + strings.Join(others, "; ") + "."
 	}
 	if a.slope != nil {
 		r.Slope = slopeReport(a.slope, s.SlopeDefaults)
@@ -61,6 +81,12 @@ func (a *screened) report(example bool, facts assess.Facts, figs []*namedFigure)
 	}
 	return r
 }
+
+// keyFigures are the figures the report draws unless asked for all: the
+// slip stereonet and the Mohr diagram of the planes, the kinematic net of
+// the slope, the cross-section with the slip zones and the along-alignment
+// chart of the tunnel. The others are files in the folder, named in the report.
+var keyFigures = []string{"stereonet-slip", "mohr", "slope-kinematic", "tunnel-section", "tunnel-profile"}
 
 // reportState is the stress state at one depth, in words.
 func reportState(st insitu.State, mu float64) report.State {
@@ -85,78 +111,24 @@ func reportState(st insitu.State, mu float64) report.State {
 	return out
 }
 
-// maxReportPlanes is the most planes the report lists: the least stable;
-// every plane is in planes.csv, and the report says so.
+// maxReportPlanes is the most planes (and readings) a report table lists:
+// the least stable; every plane is in planes.csv, and the report says so.
 const maxReportPlanes = 500
 
-// planeTable is the plane table, least stable first, grouped by set (sets in
-// order of their least stable plane) when the planes carry a set column; the
-// maxReportPlanes least stable when there are more.
-func (a *screened) planeTable() (*report.Table, bool) {
-	t := &report.Table{Columns: []string{"plane", "dip/dip dir.", "depth m", "σn'", "τ", "Ts", "Td", "FS", "ΔPp to slip", "rake °", "slip trend °", "sense", "state"},
-		Numeric: []bool{false, true, true, true, true, true, true, true, true, true, true, false, false},
-		NoWrap:  []bool{0: true, 12: true}}
-	setCol := -1
-	for i, n := range a.Extras {
-		if n == "set" {
-			setCol = i
-		}
-	}
-	var order []string
-	groups := map[string]*report.Group{}
-	ranked := a.Ranked()
-	if len(ranked) > maxReportPlanes {
-		t.Notes = append(t.Notes, fmt.Sprintf("The %d least stable of the %d planes are listed; planes.csv and planes.json hold every plane.", maxReportPlanes, len(ranked)))
-		ranked = ranked[:maxReportPlanes]
-	}
-	for _, i := range ranked {
-		p, res := &a.Planes[i], a.Results[i]
-		sense := res.Sense.String()
-		if sense == "" {
-			sense = "—"
-		}
-		row := report.Row{Class: res.State.String(), Cells: []string{p.Name, p.Orientation.String(), words.Num(p.Depth), words.Fixed(res.EffectiveNormal, 3), words.Fixed(res.Shear, 3),
-			words.Fixed(res.SlipTendency, 3), words.Fixed(res.DilationTendency, 3), words.Fixed(res.FactorOfSafety, 2), words.Fixed(res.PressureToSlip, 2), words.Rake(res.Rake), words.Trend(res.SlipTrend), sense, words.StateLabel(res.State)}}
-		set := ""
-		if setCol >= 0 {
-			set = p.Extras[setCol]
-		}
-		g, ok := groups[set]
-		if !ok {
-			g = &report.Group{}
-			groups[set] = g
-			order = append(order, set)
-		}
-		g.Rows = append(g.Rows, row)
-	}
-	for _, set := range order { // in order of each set's least stable plane
-		g := groups[set]
-		name := set
-		if name == "" {
-			name = "(none)"
-		}
-		g.Title = fmt.Sprintf("set %s — %s", name, words.Plural(len(g.Rows), "plane", "planes"))
-		t.Groups = append(t.Groups, *g)
-	}
-	return t, setCol >= 0
-}
-
-// setsTable is the table of the joint sets: statistics, how they were found,
-// and the stress on each mean plane.
+// setsTable is the table of the joint sets: statistics and how they were
+// found (the stress on each mean plane is in the key table).
 func (a *screened) setsTable() *report.Table {
 	t := &report.Table{
-		Notes:   []string{words.Grouping(a.Grouping) + " Statistics after Fisher (1953) — mean plane, concentration K, 95 % cone α95 — and Woodcock (1977) K of the orientation tensor (above 1 a cluster, below 1 a girdle). The stress is resolved on each set's mean plane at the median depth of its readings."},
-		Columns: []string{"set", "readings", "weighted", "mean plane", "pole", "K", "α95 °", "Woodcock K", "depth m", "σn'", "τ", "Ts", "FS", "ΔPp to slip", "state"},
-		Numeric: []bool{false, true, true, true, true, true, true, true, true, true, true, true, true, true, false},
-		NoWrap:  []bool{14: true},
+		Notes:   []string{words.Grouping(a.Grouping) + " Statistics after Fisher (1953) — mean plane, concentration K, 95 % cone α95 — and Woodcock (1977) K of the orientation tensor (above 1 a cluster, below 1 a girdle); sets.csv adds the weighted statistics and the stress on each mean plane."},
+		Columns: []string{"set", "readings", "weighted", "mean plane", "pole", "K", "α95 °", "Woodcock K", "Woodcock C", "median depth m"},
+		Numeric: []bool{false, true, true, true, true, true, true, true, true, true},
 	}
 	for _, st := range a.Sets {
-		r, f := st.Result, st.Set.Raw
+		f := st.Set.Raw
 		pole := f.MeanPole()
-		t.Rows = append(t.Rows, report.Row{Class: r.State.String(), Cells: []string{st.Name, fmt.Sprint(len(st.Set.Members)), words.Fixed(st.Set.WeightedCount, 1),
-			f.MeanPlane().String(), fmt.Sprintf("%03.0f/%02.0f", pole.Trend, pole.Plunge), words.Fixed(f.K, 1), words.Fixed(f.Alpha, 1), words.Fixed(st.Set.RawTensor.WoodcockK(), 2),
-			words.Num(st.Plane.Depth), words.Fixed(r.EffectiveNormal, 3), words.Fixed(r.Shear, 3), words.Fixed(r.SlipTendency, 3), words.Fixed(r.FactorOfSafety, 2),
-			words.Fixed(r.PressureToSlip, 2), words.StateLabel(r.State)}})
+		t.Rows = append(t.Rows, report.Row{Cells: []string{st.Name, fmt.Sprint(len(st.Set.Members)), words.Fixed(st.Set.WeightedCount, 1),
+			f.MeanPlane().String(), fmt.Sprintf("%03.0f/%02.0f", pole.Trend, pole.Plunge), words.Fixed(f.K, 1), words.Fixed(f.Alpha, 1),
+			words.Fixed(st.Set.RawTensor.WoodcockK(), 2), words.Fixed(st.Set.RawTensor.WoodcockC(), 2), words.Num(st.Plane.Depth)}})
 	}
 	return t
 }
@@ -170,9 +142,10 @@ func slopeReport(sc *slope.Screening, defaults []string) *report.Table {
 	if len(defaults) > 0 {
 		t.Notes = append(t.Notes, "Defaults applied: "+strings.Join(defaults, "; ")+".")
 	}
-	t.Notes = append(t.Notes, "The feasible cases (every test, feasible or not, with the condition that failed, is in slope.csv with the wedges' face traces and areas; the mode of a wedge comes from the normal reactions of its block, the plan-view rule in brackets where it differs). Planar blocks are per metre of slope (MN/m); a wedge is the largest the two planes cut, its line daylighting at the toe; its block is its weight and volume. FS columns by water case (m of water at the block's deepest wet point; the head of the table and full cases varies by block, see slope.csv):")
+	t.Notes = append(t.Notes, "The feasible cases; every test, feasible or not, with the condition that failed, the heads of water, face traces and areas, is in slope.csv. A wedge's mode comes from the normal reactions of its block (the plan-view rule in brackets where it differs); a wedge is the largest block its planes cut, so its weight is an upper bound. Planar blocks per metre of slope. FS by water case:")
 	t.Columns = []string{"test", "planes", "mode", "line", "φ °", "block"}
-	t.Numeric = []bool{false, false, false, true, true, true}
+	t.NoWrap = []bool{1: true}
+	t.Numeric = []bool{false, false, false, true, true, false}
 	for _, w := range sc.Slope.Water {
 		t.Columns = append(t.Columns, "FS "+words.WaterShort(w))
 		t.Numeric = append(t.Numeric, true)
@@ -232,16 +205,11 @@ func slopeReport(sc *slope.Screening, defaults []string) *report.Table {
 	return t
 }
 
-// slopeReadingsReport is the readings against the slope's tests.
+// slopeReadingsReport is the readings against the slope's tests, in
+// words: per test, how many pass, and the set that passes most (every
+// count per set and pair of sets is in slope-readings.csv).
 func slopeReadingsReport(counts []slope.Count) *report.Table {
-	t := &report.Table{Notes: words.ReadingLines(counts)[1:],
-		Columns: []string{"test", "sets", "tested", "passing", "share %", "weighted share %"},
-		Numeric: []bool{false, false, true, true, true, true}}
-	for _, c := range counts {
-		t.Rows = append(t.Rows, report.Row{Cells: []string{c.Test.String(), words.SetsOf(c), fmt.Sprint(c.Tested), fmt.Sprint(c.Pass),
-			words.Fixed(100*c.Share(), 1), words.Fixed(100*c.WeightedShare(), 1)}})
-	}
-	return t
+	return &report.Table{Notes: words.ReadingLines(counts)}
 }
 
 // tunnelReport is the rest of the tunnel screening as the report shows it,

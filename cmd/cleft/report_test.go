@@ -82,22 +82,30 @@ func text(n *html.Node) string {
 func TestReportStructure(t *testing.T) {
 	dir := demoReport(t)
 	doc := parseHTML(t, filepath.Join(dir, "report.html"))
-	for _, id := range []string{"header", "summary", "inputs", "stress", "planes", "sets", "slope", "tunnel", "figures", "method", "limitations"} {
+	for _, id := range []string{"header", "summary", "look-first", "inputs", "stress", "planes", "sets", "slope", "tunnel", "figures", "method", "limitations", "appendix", "readings"} {
 		if byID(doc, id) == nil {
 			t.Errorf("no section #%s", id)
 		}
 	}
-	// One table row per plane; group rows (sets) aside.
-	rows := 0
-	walk(byID(doc, "planes"), func(n *html.Node) {
-		if n.Type == html.ElementNode && n.Data == "tr" {
-			if c, _ := attr(n, "class"); c == "stable" || c == "critical" || c == "opening" {
-				rows++
+	// The key table: one row per mapped plane and set mean, not the
+	// readings (group rows and the rows of carried columns aside); the
+	// appendix one row per set of readings and the unassigned ones.
+	count := func(id string) int {
+		rows := 0
+		walk(byID(doc, id), func(n *html.Node) {
+			if n.Type == html.ElementNode && n.Data == "tr" {
+				if c, _ := attr(n, "class"); c == "stable" || c == "critical" || c == "opening" {
+					rows++
+				}
 			}
-		}
-	})
-	if rows != 139+3 {
-		t.Errorf("%d plane and set rows, want 139 planes + 3 sets", rows)
+		})
+		return rows
+	}
+	if rows := count("planes"); rows != 6+3 {
+		t.Errorf("%d plane and set rows in the key table, want 6 planes + 3 sets", rows)
+	}
+	if rows := count("appendix"); rows != 3+1 {
+		t.Errorf("%d rows of readings in the appendix, want 3 sets + the unassigned", rows)
 	}
 	figs, svgs := 0, 0
 	walk(doc, func(n *html.Node) {
@@ -120,8 +128,11 @@ func TestReportStructure(t *testing.T) {
 			}
 		}
 	})
-	if figs != 10 || svgs != 10 { // the demo's 8, and the 2 of its cases: and uncertainty:
-		t.Errorf("%d figures, %d inline SVGs; want 10 and 10", figs, svgs)
+	if figs != len(keyFigures) || svgs != len(keyFigures) { // the others are files, named in the report
+		t.Errorf("%d figures, %d inline SVGs; want %d and %d", figs, svgs, len(keyFigures), len(keyFigures))
+	}
+	if f := text(byID(doc, "figures")); !strings.Contains(f, "stereonet-dilation") || !strings.Contains(f, "chance-sensitivity") {
+		t.Error("the figures section does not name the figures it leaves to files")
 	}
 	// The tunnel section leads with the slip zones: one row per screened
 	// set, and the zone caution.
@@ -134,8 +145,8 @@ func TestReportStructure(t *testing.T) {
 	if zrows != 1+4 {
 		t.Errorf("zone table has %d rows, want a header and the 4 sets", zrows-1)
 	}
-	if tn := text(byID(doc, "tunnel")); !strings.Contains(tn, "slip zone up to") || !strings.Contains(tn, "not a support design") || !strings.Contains(tn, "Thiem") {
-		t.Error("the tunnel section lacks the zone headline, caution or pore-pressure rule")
+	if tn := text(byID(doc, "tunnel")); !strings.Contains(tn, "deepest slip zone of each plane or set") || !strings.Contains(tn, "not a support design") || !strings.Contains(tn, "Thiem") {
+		t.Error("the tunnel section lacks the zone table's headline, caution or pore-pressure rule")
 	}
 	data, _ := os.ReadFile(filepath.Join(dir, "report.html"))
 	for _, bad := range []string{"http://", "https://", "@import", "url("} {
@@ -241,11 +252,23 @@ func TestReportInBrowser(t *testing.T) {
 	if err != nil {
 		t.Fatalf("printed PDF: %v", err)
 	}
-	// Header, summary and inputs; stress; 139 plane rows (about 45 a page);
-	// sets and slope; five figures; method and limitations: at least eight
-	// pages, and not a runaway layout.
-	if n := r.NumPage(); n < 8 || n > 24 {
-		t.Errorf("printed PDF has %d pages (%d bytes), want 8 to 24", n, st.Size())
+	// Header and summary; the key table, inputs and stress; slope, tunnel
+	// and chance; five figures two to a page (the tall chart alone); method,
+	// limitations and the appendix: not fewer than five pages, and not a
+	// runaway layout (the readings are not listed one by one).
+	if n := r.NumPage(); n < 5 || n > 14 {
+		t.Errorf("printed PDF has %d pages (%d bytes), want 5 to 14", n, st.Size())
+	}
+	// Nothing is wider than the page: a browser shrinks the whole report
+	// to fit its widest table, and the title (1.55rem, 16 px to the rem:
+	// 24.8 px = 18.6 pt) would print smaller.
+	const tol = 0.2 // pt
+	title := 0.0
+	for _, tx := range r.Page(1).Content().Text {
+		title = max(title, tx.FontSize)
+	}
+	if title < 18.6-tol {
+		t.Errorf("the title prints at %.2f pt, not 18.6: the report was shrunk to fit a table wider than the page", title)
 	}
 }
 

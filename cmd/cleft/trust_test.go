@@ -74,25 +74,32 @@ func checkNoOpeningWithRise(t *testing.T, dir string) int {
 		}
 		openingRise(t, fmt.Sprintf("summary.json %v", r["name"]), fmt.Sprint(r["state"]), rise)
 	}
-	// The report: each table of the Planes section, its ΔPp column by its
-	// header, its rows by their class.
+	// The report: each table of the Planes section (the key table) and
+	// each table of the appendix with a state column (the readings), its
+	// ΔPp column by its header, its rows by their class.
 	doc := parseHTML(t, filepath.Join(dir, "report.html"))
 	tables := 0
-	walk(byID(doc, "planes"), func(tb *html.Node) {
+	check := func(section string, tb *html.Node) {
 		if tb.Type != html.ElementNode || tb.Data != "table" {
 			return
 		}
-		col, k := -1, 0
+		col, k, state := -1, 0, false
 		walk(tb, func(th *html.Node) {
 			if th.Type == html.ElementNode && th.Data == "th" && th.Parent.Parent.Data == "thead" {
-				if text(th) == "ΔPp to slip" {
+				switch text(th) {
+				case "ΔPp to slip":
 					col = k
+				case "state":
+					state = true
 				}
 				k++
 			}
 		})
+		if section == "appendix" && !state {
+			return
+		}
 		if col < 0 {
-			t.Errorf("a report table of the Planes section has no ΔPp column")
+			t.Errorf("a report table of the %s section has no ΔPp column", section)
 			return
 		}
 		tables++
@@ -109,7 +116,12 @@ func checkNoOpeningWithRise(t *testing.T, dir string) int {
 			}
 			openingRise(t, "report row "+cells[0], c, cells[col])
 		})
-	})
+	}
+	for _, section := range []string{"planes", "appendix"} {
+		if n := byID(doc, section); n != nil {
+			walk(n, func(tb *html.Node) { check(section, tb) })
+		}
+	}
 	if tables == 0 {
 		t.Error("the report has no plane table")
 	}

@@ -14,8 +14,8 @@ import (
 // each plane or set's deepest slip zone and the stretches where it reaches
 // deeper than the limit (every station is in zones.csv).
 func zonesReport(sc *tunnel.Screening) *report.Table {
-	notes := append(words.TunnelLines(sc), words.ZoneMethod(sc), words.ZoneCaution,
-		"The deepest zone of each plane or set whose depth is known (every station and set is in zones.csv):")
+	notes := append(words.TunnelLines(sc)[:2], words.ZoneMethod(sc), words.ZoneCaution,
+		"The deepest slip zone of each plane or set whose depth is known, and where zones reach deeper than the limit (every station and set is in zones.csv; the drive classes on each leg are in stations.csv):")
 	lim := words.Num(sc.Tunnel.Limit())
 	t := &report.Table{Notes: notes,
 		Columns: []string{"plane or set", "deepest zone m", "at chainage m", "at ° from crown", "area m² per m", "open to the wall", "opening part m",

@@ -8,6 +8,7 @@ import (
 	_ "embed"
 	"html/template"
 	"io"
+	"strconv"
 	"strings"
 )
 
@@ -19,19 +20,32 @@ type Report struct {
 	Inputs    []Input
 	Model     string   // the model in one line
 	Summary   []string // the plain-words summary, one sentence each
+	// LookFirst are the findings to look at first, ranked, one sentence
+	// each, after LookRule (how they are ranked, in brief; in full in the
+	// method, RankRule) and before More (what is left out) and Checks (the
+	// frictional-limit check).
+	LookFirst []string
+	LookRule  string
+	RankRule  string
+	More      string
+	Checks    []string
 	Params    []Param
 	Notes     []string
 	States    []State // the stress state at the report depths
-	Planes    *Table  // the plane table, least to most stable
-	BySet     bool    // Planes.Groups are joint sets
-	Sets      *Table  // joint sets of the field readings, or nil
-	Slope     *Table  // the rock-slope screening, or nil
+	Planes    *Table  // the key table: mapped planes and set means, least to most stable
+	BySet     bool    // Planes.Groups have titles
+	Sets      *Table  // joint sets of the field readings, or nil (in the appendix)
+	// Readings is the appendix of the field readings (per set, or every
+	// one), or nil.
+	Readings *Table
+	Slope    *Table // the rock-slope screening, or nil
 	// SlopeReadings is the field readings against the slope's tests, or nil.
 	SlopeReadings *Table
 	Tunnel        *Table // the tunnel screening, or nil
 	Zones         *Table // the tunnel's slip zones, shown before Tunnel, or nil
 	Chance        *Table // the cases and the Monte Carlo, or nil
 	Figures       []Figure
+	FiguresNote   string // the figures drawn as files only, or ""
 	Criterion     string // the site criterion in words
 	Caution       string
 }
@@ -76,9 +90,14 @@ type Table struct {
 }
 
 // Row is one row; Class is "critical", "opening" or "" and sets its style.
+// Own marks the cells that are a plane's own input (shown bold). Extra,
+// when not "", is shown under the row across the table (a plane's carried
+// columns).
 type Row struct {
 	Class string
 	Cells []string
+	Own   []bool
+	Extra string
 }
 
 // Group is a titled run of rows.
@@ -99,6 +118,21 @@ var page string
 
 var tmpl = template.Must(template.New("report").Funcs(template.FuncMap{
 	"inc": func(i int) int { return i + 1 },
+	"dec": func(i int) int { return i - 1 },
+	"cell": func(t *Table, r Row, i int) template.HTMLAttr {
+		own := i < len(r.Own) && r.Own[i]
+		switch {
+		case own && i < len(t.Numeric) && t.Numeric[i]:
+			return ` class="n own"`
+		case own:
+			return ` class="own"`
+		case i < len(t.Numeric) && t.Numeric[i]:
+			return ` class="n"`
+		case i < len(t.NoWrap) && t.NoWrap[i]:
+			return ` class="state"`
+		}
+		return ""
+	},
 	"cls": func(t *Table, i int) template.HTMLAttr {
 		switch {
 		case i < len(t.Numeric) && t.Numeric[i]:
@@ -122,16 +156,35 @@ func inline(svg []byte) template.HTML {
 	return template.HTML(s)
 }
 
+// size returns the width and height of an SVG document from its viewBox,
+// 0 and 0 when it has none.
+func size(svg []byte) (w, h float64) {
+	s := string(svg[:min(len(svg), 1024)])
+	i := strings.Index(s, `viewBox="`)
+	if i < 0 {
+		return 0, 0
+	}
+	f := strings.Fields(s[i+len(`viewBox="`):])
+	if len(f) < 4 {
+		return 0, 0
+	}
+	w, _ = strconv.ParseFloat(f[2], 64)
+	h, _ = strconv.ParseFloat(strings.TrimSuffix(f[3], `"`), 64)
+	return w, h
+}
+
 // WriteHTML writes the report.
 func (r *Report) WriteHTML(w io.Writer) error {
 	type fig struct {
 		Figure
-		SVG template.HTML
-		N   int
+		SVG  template.HTML
+		N    int
+		Tall bool // higher than wide: printed up to a page high
 	}
 	figs := make([]fig, len(r.Figures))
 	for i, f := range r.Figures {
-		figs[i] = fig{Figure: f, SVG: inline(f.SVG), N: i + 1}
+		w, h := size(f.SVG)
+		figs[i] = fig{Figure: f, SVG: inline(f.SVG), N: i + 1, Tall: h > w}
 	}
 	return tmpl.Execute(w, struct {
 		*Report

@@ -48,6 +48,17 @@ func unstableWord(opens bool) string {
 // realisations, and the least sure three. out may be nil (cases only);
 // runs holds at least the base.
 func ChanceLines(targets []study.Target, runs []study.CaseRun, out *study.Outcome) []string {
+	lines := ChanceOverview(targets, runs, out)
+	for _, i := range ChanceOrder(targets, runs, out)[:min(3, len(targets))] {
+		lines = append(lines, ChanceOf(targets, runs, out, i))
+	}
+	return lines
+}
+
+// ChanceOverview is the first sentences of ChanceLines: how many targets
+// keep their state in every case, and how many are unsure in the
+// realisations.
+func ChanceOverview(targets []study.Target, runs []study.CaseRun, out *study.Outcome) []string {
 	var lines []string
 	n := len(targets)
 	if len(runs) > 1 {
@@ -80,9 +91,6 @@ func ChanceLines(targets []study.Target, runs []study.CaseRun, out *study.Outcom
 		}
 		lines = append(lines, fmt.Sprintf("The Monte Carlo drew %d realisations of %s (seed %d): %d of %d planes and set means are critical or opening in at least 5 %% of them, %d in at least half.",
 			out.N, what, out.Seed, some, n, half))
-	}
-	for _, i := range ChanceOrder(targets, runs, out)[:min(3, n)] {
-		lines = append(lines, ChanceOf(targets, runs, out, i))
 	}
 	return lines
 }
