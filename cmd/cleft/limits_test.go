@@ -2,6 +2,7 @@ package main
 
 import (
 	"bytes"
+	"cleft/planes/site"
 	"fmt"
 	"io"
 	"os"
@@ -39,7 +40,7 @@ func TestOneReadingSetHasEmptyStatistics(t *testing.T) {
 func TestReadingsRefused(t *testing.T) {
 	var many strings.Builder
 	many.WriteString("dip,dip_direction\n")
-	for i := range 20001 {
+	for i := range site.MaxReadings + 1 {
 		fmt.Fprintf(&many, "%d,%d\n", i%90, i%360)
 	}
 	dir := files(t, map[string]string{
@@ -48,7 +49,7 @@ func TestReadingsRefused(t *testing.T) {
 	})
 	for _, c := range []struct{ file, want string }{
 		{"w.csv", "w.csv:2: weight (column 3): 1e308: a weight must be in (0, 1000]"},
-		{"many.csv", "many.csv:20002: more than 20000 readings: cleft groups at most 20000 into sets"},
+		{"many.csv", fmt.Sprintf("many.csv:%d: more than %d readings: cleft groups at most %d into sets", site.MaxReadings+2, site.MaxReadings, site.MaxReadings)},
 	} {
 		code, _, stderr := cleft(t, "", "sets", filepath.Join(dir, c.file))
 		if code != 1 || !strings.Contains(oneMessage(t, stderr), c.want) {

@@ -23,7 +23,7 @@ const (
 	MaxSiteBytes    = 2 << 20  // bytes of a site file (its YAML tree takes about 60 times as much memory)
 	MaxRow          = 64 << 10 // bytes of one row of a table, a quoted value spanning lines included
 	MaxColumns      = 1000     // columns of a table
-	MaxReadings     = 20000    // field readings grouped into sets
+	MaxReadings     = 1000000  // field readings grouped into sets (cleft sets; assess holds at most MaxPlanes)
 	MaxCoverPoints  = 100000   // points of a tunnel's cover profile
 	MaxStations     = 10000    // stations along a tunnel
 	MaxReportDepths = 50       // report.depths
