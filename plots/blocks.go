@@ -29,24 +29,6 @@ func (p *labeller) blockDisk(o vg.Point, r, step vg.Length) {
 	}
 }
 
-// blockPath marks the squares of half-side d round the points of a
-// polyline as taken, at most step apart along it, so that names stay clear
-// of the line.
-func (p *labeller) blockPath(pts []vg.Point, d, step vg.Length) {
-	for i, a := range pts {
-		p.block(square(a, d))
-		if i+1 == len(pts) {
-			break
-		}
-		b := pts[i+1]
-		n := int(math.Hypot(float64(b.X-a.X), float64(b.Y-a.Y)) / float64(step))
-		for k := 1; k <= n; k++ {
-			f := vg.Length(k) / vg.Length(n+1)
-			p.block(square(vg.Point{X: a.X + (b.X-a.X)*f, Y: a.Y + (b.Y-a.Y)*f}, d))
-		}
-	}
-}
-
 func abs(v vg.Length) vg.Length {
 	if v < 0 {
 		return -v

@@ -78,14 +78,6 @@ var (
 	warning = color.NRGBA{R: 0xb0, G: 0x1c, B: 0x1c, A: 0xff} // the FS = 1 line's dashes
 )
 
-// titleBlock draws lines of text from the top-left of c: the first bold and
-// larger, the others in grey, each wrapped to the width of c. It returns the
-// height used.
-func titleBlock(c *draw.Canvas, lines []string) vg.Length {
-	tl := titleLines(look{k: 1}, lines, c.Max.X-c.Min.X)
-	return tl.draw(c, c.Min.X, c.Max.Y)
-}
-
 // Room the layout keeps for a reader without Liberation Sans or a font of
 // its metrics (Arimo, Arial, Helvetica): the common fallback, DejaVu Sans,
 // sets text about 15 % wider, its bold about 20 % wider (measured on the

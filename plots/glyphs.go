@@ -108,14 +108,3 @@ func meanGlyph(c *draw.Canvas, at vg.Point, g float64) {
 	c.StrokeLines(draw.LineStyle{Color: white, Width: vg.Points(2.4)}, cross)
 	c.FillPolygon(meanInk, cross)
 }
-
-// haloText draws text with a white halo so that it reads over the raster;
-// at and the alignment are those of draw.Canvas.FillText.
-func haloText(c *draw.Canvas, sty draw.TextStyle, at vg.Point, txt string) {
-	h := sty
-	h.Color = white
-	for _, d := range []vg.Point{{X: -haloSize, Y: 0}, {X: haloSize, Y: 0}, {X: 0, Y: -haloSize}, {X: 0, Y: haloSize}} {
-		c.FillText(h, vg.Point{X: at.X + d.X, Y: at.Y + d.Y}, txt)
-	}
-	c.FillText(sty, at, txt)
-}

@@ -55,10 +55,6 @@ func drawRaster(n net, f *Field, clr func(float64) color.NRGBA) {
 	n.c.DrawImage(vg.Rectangle{Min: vg.Point{X: n.cx - half, Y: n.cy - half}, Max: vg.Point{X: n.cx + half, Y: n.cy + half}}, img)
 }
 
-// drawPrimitive draws the primitive circle, its 10° ticks and the north
-// mark in the default look.
-func drawPrimitive(n net) { drawPrimitiveLook(n, look{k: 1}) }
-
 // tickOut is the length of the longest tick outside the primitive, in net
 // units.
 const tickOut = 0.05

@@ -296,14 +296,6 @@ func (f *fields) optNumber(key string, iv interval, def float64) (float64, bool,
 	return x, true, err
 }
 
-func (f *fields) optText(key string) (string, error) {
-	v, ok := f.get(key)
-	if !ok {
-		return "", nil
-	}
-	return v.text()
-}
-
 // source reads the optional free-text source: key.
 func (f *fields) source() (string, error) {
 	v, ok := f.get("source")
