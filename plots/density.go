@@ -56,77 +56,51 @@ type DensityNet struct {
 // an n × n net grid, in parallel over rows; nodes outside the primitive take
 // the value of the primitive point on their radius. The counting is
 // sets.KambCounter's, the same to the last bit as sets.Kamb.Density at each
-// node, in time O(n² + N) for N poles.
+// node, in time O(n² + N) for N poles. Weights are scaled to sum to the
+// number of readings.
 func NewDensityField(p Projection, poles []r3.Vec, weights []float64, n int) (*Field, sets.Kamb) {
-	total := float64(len(poles))
-	if weights != nil { // weights scaled to sum to the number of readings
-		sw := 0.0
-		for _, w := range weights {
-			sw += w
+	k := sets.NewKamb(float64(len(poles)))
+	kc := sets.NewKambCounter(k, poles, scaledWeights(weights))
+	f := densityField(p, n, func() func(r3.Vec) float64 {
+		var scratch []int32
+		return func(a r3.Vec) (v float64) {
+			v, scratch = kc.Density(a, scratch)
+			return v
 		}
-		scaled := make([]float64, len(weights))
-		for i, w := range weights {
-			scaled[i] = w * total / sw
-		}
-		weights = scaled
-	}
-	k := sets.NewKamb(total)
-	kc := sets.NewKambCounter(k, poles, weights)
-	f := &Field{N: n, Values: make([]float64, n*n)}
-	rows := make(chan int, n)
-	for j := range n {
-		rows <- j
-	}
-	close(rows)
-	var wg sync.WaitGroup
-	for range runtime.GOMAXPROCS(0) {
-		wg.Go(func() {
-			var scratch []int32
-			for j := range rows {
-				for i := range n {
-					pt := f.Node(i, j)
-					if r := math.Hypot(pt.X, pt.Y); r > 1 {
-						pt.X, pt.Y = pt.X/r, pt.Y/r
-					}
-					l, _ := p.Inverse(pt)
-					f.Values[j*n+i], scratch = kc.Density(l.Vec(), scratch)
-				}
-			}
-		})
-	}
-	wg.Wait()
-	f.Min, f.Max = math.Inf(1), math.Inf(-1)
-	for j := range n {
-		for i := range n {
-			if f.Inside(i, j) {
-				v := f.Values[j*n+i]
-				f.Min, f.Max = math.Min(f.Min, v), math.Max(f.Max, v)
-			}
-		}
-	}
+	})
 	return f, k
 }
 
 // NewSmoothField evaluates the smoothed pole density of the poles
 // (sets.Smoothing, the exponential Kamb weighting of Vollmer 1995) at every
-// node of an n × n net grid, in parallel over rows, as NewDensityField
-// counts: weights scaled to sum to the number of readings, nodes outside
-// the primitive given the value of the primitive point on their radius.
+// node of an n × n net grid as NewDensityField counts.
 func NewSmoothField(p Projection, poles []r3.Vec, weights []float64, n int) (*Field, sets.Smoothing) {
-	total := float64(len(poles))
-	if weights != nil {
-		sw := 0.0
-		for _, w := range weights {
-			sw += w
-		}
-		scaled := make([]float64, len(weights))
-		for i, w := range weights {
-			scaled[i] = w * total / sw
-		}
-		weights = scaled
+	sm := sets.NewSmoothing(float64(len(poles)))
+	sc := sets.NewSmoothCounter(sm, poles, scaledWeights(weights))
+	return densityField(p, n, func() func(r3.Vec) float64 { return sc.Density }), sm
+}
+
+// scaledWeights returns the weights scaled to sum to their number, or nil.
+func scaledWeights(weights []float64) []float64 {
+	if weights == nil {
+		return nil
 	}
-	sm := sets.NewSmoothing(total)
-	sc := sets.NewSmoothCounter(sm, poles, weights)
+	sw := 0.0
+	for _, w := range weights {
+		sw += w
+	}
+	scaled := make([]float64, len(weights))
+	for i, w := range weights {
+		scaled[i] = w * float64(len(weights)) / sw
+	}
+	return scaled
+}
+
+// densityField evaluates a density at the axis of every node of an n × n
+// net grid, in parallel over rows; each worker gets its own evaluator from
+// eval. Nodes outside the primitive take the value of the primitive point
+// on their radius.
+func densityField(p Projection, n int, eval func() func(r3.Vec) float64) *Field {
 	f := &Field{N: n, Values: make([]float64, n*n)}
 	rows := make(chan int, n)
 	for j := range n {
@@ -136,6 +110,7 @@ func NewSmoothField(p Projection, poles []r3.Vec, weights []float64, n int) (*Fi
 	var wg sync.WaitGroup
 	for range runtime.GOMAXPROCS(0) {
 		wg.Go(func() {
+			density := eval()
 			for j := range rows {
 				for i := range n {
 					pt := f.Node(i, j)
@@ -143,7 +118,7 @@ func NewSmoothField(p Projection, poles []r3.Vec, weights []float64, n int) (*Fi
 						pt.X, pt.Y = pt.X/r, pt.Y/r
 					}
 					l, _ := p.Inverse(pt)
-					f.Values[j*n+i] = sc.Density(l.Vec())
+					f.Values[j*n+i] = density(l.Vec())
 				}
 			}
 		})
@@ -158,7 +133,7 @@ func NewSmoothField(p Projection, poles []r3.Vec, weights []float64, n int) (*Fi
 			}
 		}
 	}
-	return f, sm
+	return f
 }
 
 // Draw draws the figure on c, laid out like the tendency stereonet: text
