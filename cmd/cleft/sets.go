@@ -40,8 +40,9 @@ optional name, depth, weight; any other column is carried through) and groups
 their poles into sets: spherical k-means on axes, so that a set of steep joints
 straddling the primitive stays one set. Give the number of sets (--sets), or
 starting means (--seed, repeated), or neither for an automatic choice by the
-mean silhouette width (Rousseeuw 1987), which is printed. --max-angle leaves
-readings farther than that from every set mean unassigned.
+mean silhouette width (Rousseeuw 1987), which is printed. --max-angle then
+trims each set: readings farther than that from their own set's mean are
+unassigned (the cone never changes which sets there are).
 
 --line gives the scanline or borehole the readings were taken along: each
 reading is then weighted by Terzaghi's 1/|cos δ| (δ between the line and the

@@ -78,7 +78,20 @@ func Analyse(poles []r3.Vec, weights []float64, o Options) Analysis {
 		a.Auto, a.ChosenOn = true, min(len(poles), ChooseSample)
 	}
 	co.K = min(max(co.K, 1), len(poles))
+	// The cut-off cone trims each set about its axis after the grouping:
+	// it never changes which sets there are. (Inside the k-means it could
+	// leave a tight set outside every cone and so unassigned, while the
+	// count was chosen with it as a set.)
+	cut := co.MaxAngle
+	co.MaxAngle = 0
 	c := Cluster(poles, co)
+	if cut > 0 {
+		for i, s := range c.Assign {
+			if s >= 0 && geom.AxialAngle(poles[i], c.Axes[s]) > cut {
+				c.Assign[i] = -1
+			}
+		}
+	}
 	if len(o.Seeds) > 0 && done != nil {
 		done()
 	}

@@ -36,7 +36,7 @@ func Grouping(g *sets.Grouping) string {
 		}
 	}
 	if g.Config.MaxAngle > 0 {
-		fmt.Fprintf(&b, " Readings more than %g° from every set axis are unassigned (%d).", g.Config.MaxAngle, an.Unassigned)
+		fmt.Fprintf(&b, " Readings more than %g° from their own set's axis are unassigned (%d).", g.Config.MaxAngle, an.Unassigned)
 	}
 	if l := g.Config.Line; l != nil {
 		fmt.Fprintf(&b, " Weights: Terzaghi 1/|cos δ| for the sampling line %03.0f/%02.0f, capped at %g", l.Trend, l.Plunge, g.Config.MaxWeight)
