@@ -55,7 +55,7 @@ func layFrameFrom(c draw.Canvas, l look, title []string, key *keyBox, score scor
 		key   *keyBox
 	}{{title, key}, {title, &bare}, {short, &bare}, {title[:min(1, len(title))], &keyBox{}}} {
 		f, _ := l.frameOn(c, try.title, try.key, score)
-		if f.fits {
+		if f.fits && score(f.l, f.main) > 0 { // a score of 0: no room for the drawing
 			return f
 		}
 	}

@@ -102,12 +102,19 @@ func (m *Mohr) title() []string {
 	return lines
 }
 
+// minMohrSide is the least width and height of the Mohr diagram's data
+// area that a layout may leave it.
+const minMohrSide = 40 // points
+
 // layout lays the figure out on c and returns the frame and the plot,
 // scaled equally on both axes in the frame's main area.
 func (m *Mohr) layout(c draw.Canvas) (frame, *plot.Plot) {
 	score := func(l look, main vg.Rectangle) float64 {
 		p := m.plot(l, main)
 		da := p.DataCanvas(sub(c, main))
+		if da.Max.X-da.Min.X < minMohrSide || da.Max.Y-da.Min.Y < minMohrSide {
+			return 0 // no room for the circles: the key must go elsewhere or shrink
+		}
 		return float64(da.Max.X-da.Min.X) / (p.X.Max - p.X.Min)
 	}
 	f := layFrame(c, m.title(), m.key(), score)
@@ -171,6 +178,9 @@ func equalScale(p *plot.Plot, c draw.Canvas) {
 	for range 3 { // tick labels change the data area a little; settle it
 		da := p.DataCanvas(c)
 		w, h := float64(da.Max.X-da.Min.X), float64(da.Max.Y-da.Min.Y)
+		if !(w > 0 && h > 0) {
+			return // no data area to scale (a canvas too small for the axes)
+		}
 		sx, sy := w/(p.X.Max-p.X.Min), h/(p.Y.Max-p.Y.Min)
 		if sx > sy {
 			p.X.Max = p.X.Min + w/sy

@@ -92,3 +92,28 @@ func TestMohrArrowDepth(t *testing.T) {
 		t.Errorf("own depth equal to the diagram's: %q", s)
 	}
 }
+
+func TestMohrSmallCanvasKeepsTheCircles(t *testing.T) {
+	// On the smallest canvases the command allows, the key gives way to
+	// the circles (it is cut to fit) rather than squeezing the data area to
+	// nothing: the diagram still spans σ3' to σ1' at equal scales
+	// (a newcomer found an empty diagram with an axis of −22 to −18 MPa at
+	// 7 × 7 cm).
+	const scaleTol = 0.005
+	m := demoMohrOf(t, -1)
+	s := m.State.EffectivePrincipal()
+	for _, cmSize := range [][2]float64{{6, 6}, {7, 7}, {8, 7}, {6, 10}} {
+		c := draw.New(vgimg.New(vg.Length(cmSize[0])*vg.Centimeter, vg.Length(cmSize[1])*vg.Centimeter))
+		f, p := m.layout(c)
+		da := p.DataCanvas(sub(c, f.main))
+		if da.Max.X-da.Min.X < minMohrSide || da.Max.Y-da.Min.Y < minMohrSide {
+			t.Errorf("%v cm: data area %v", cmSize, da.Rectangle)
+		}
+		if !(p.X.Min <= s[2] && p.X.Max >= s[0]) {
+			t.Errorf("%v cm: σn' axis %v to %v misses the circles %v to %v", cmSize, p.X.Min, p.X.Max, s[2], s[0])
+		}
+		if sx, sy := m.Scales(c); math.Abs(sx-sy)/sx > scaleTol {
+			t.Errorf("%v cm: scales %v and %v", cmSize, sx, sy)
+		}
+	}
+}

@@ -65,8 +65,8 @@ Measures: ` + strings.Join(plots.Measures(), ", ") + `.
 	floatsVar(f, &o.contours, "contours", "contour levels of the measure, e.g. 0.2,0.4,0.6")
 	f.StringVar(&o.traces, "great-circles", "unstable", "great circles to draw: unstable, all, none, or plane names")
 	f.StringVar(&o.out, "out", "", "output file: .png, .svg or .pdf")
-	floatVar(f, &o.width, "width", 0, "figure width, cm, 4 to 100 (default 19 for a stereonet, 17 for a Mohr diagram)")
-	floatVar(f, &o.height, "height", 0, "figure height, cm, 4 to 100 (default 13.5 for a stereonet, 12 for a Mohr diagram)")
+	floatVar(f, &o.width, "width", 0, "figure width, cm, 6 to 100 (default 19 for a stereonet, 17 for a Mohr diagram)")
+	floatVar(f, &o.height, "height", 0, "figure height, cm, 6 to 100 (default 13.5 for a stereonet, 12 for a Mohr diagram)")
 	return c
 }
 
@@ -95,7 +95,7 @@ func runPlot(o plotOptions, cmd *cobra.Command) error {
 	}
 	for i, v := range []float64{o.width, o.height} {
 		if v != 0 {
-			if err := inRange([]string{"width", "height"}[i], v, 4, 100, " cm"); err != nil {
+			if err := inRange([]string{"width", "height"}[i], v, 6, 100, " cm"); err != nil {
 				return err
 			}
 		}
