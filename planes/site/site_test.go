@@ -42,7 +42,8 @@ func TestParseDefaults(t *testing.T) {
 	}
 	// Density 2700 kg/m³ → 0.026487 MPa/m (ρ·g with g = 9.81, common practice).
 	st := s.Model.At(100)
-	if !scalar.EqualWithinAbs(st.Total.DD, 2.6487, 1e-9) {
+	const tol = 1e-9 // MPa
+	if !scalar.EqualWithinAbs(st.Total.DD, 2.6487, tol) {
 		t.Errorf("Sv(100 m) = %v, want 2.6487", st.Total.DD)
 	}
 	if got := s.Summary(); !strings.Contains(got, "SHmax 1.3·Sv @ 065°") || !strings.Contains(got, "μ = 0.6 (default)") {
@@ -63,7 +64,8 @@ water: {dry: true}
 	st := s.Model.At(1000)
 	// Sheorey (1994) as given by Hoek, derived: k(50 GPa, 1000 m) = 0.95.
 	want := 0.95 * 27
-	if v := st.Principal.Values; !scalar.EqualWithinAbs(v[2], want, 1e-9) || !scalar.EqualWithinAbs(v[1], want, 1e-9) {
+	const tol = 1e-9 // MPa
+	if v := st.Principal.Values; !scalar.EqualWithinAbs(v[2], want, tol) || !scalar.EqualWithinAbs(v[1], want, tol) {
 		t.Errorf("horizontal stresses %v, want both %v", v, want)
 	}
 }
