@@ -181,21 +181,54 @@ func TestOrientationTensorPatterns(t *testing.T) {
 }
 
 func TestTerzaghiWeight(t *testing.T) {
-	// Terzaghi (1965): w = 1/|cos δ|, δ between the sampling line and the pole.
+	// Terzaghi (1965): w = 1/|cos δ|, δ between the sampling line and the
+	// pole. Derived by hand for a vertical borehole, where δ is the dip:
+	// w = 1 at dip 0, √2 at 45° and 2 at 60° (cos 60° = ½); the cap beyond
+	// 84.26° (cos δ = 1/10).
 	line := r3.Vec{Z: 1} // a vertical borehole
-	for _, dip := range []float64{0, 30, 60, 80, 84, 85, 89, 90} {
-		o := planes.MustNew(dip, 40)
-		want := 1 / math.Abs(math.Cos(dip*math.Pi/180))
-		if want > DefaultMaxWeight {
-			want = DefaultMaxWeight
-		}
-		if got := TerzaghiWeight(o.Normal(), line, DefaultMaxWeight); !scalar.EqualWithinAbsOrRel(got, want, tol, tol) {
-			t.Errorf("dip %v: w = %v, want %v", dip, got, want)
+	for _, c := range []struct{ dip, want float64 }{
+		{0, 1}, {45, math.Sqrt2}, {60, 2}, {85, DefaultMaxWeight}, {89, DefaultMaxWeight}, {90, DefaultMaxWeight},
+	} {
+		if got := TerzaghiWeight(planes.MustNew(c.dip, 40).Normal(), line, DefaultMaxWeight); !scalar.EqualWithinAbsOrRel(got, c.want, tol, tol) {
+			t.Errorf("dip %v: w = %v, want %v", c.dip, got, c.want)
 		}
 	}
 	// The cap applies from sin θ = 1/max: θ = 5.74° for max = 10.
 	if w := TerzaghiWeight(planes.MustNew(84.3, 0).Normal(), line, 10); w != 10 {
 		t.Errorf("plane 5.7° from the line: w = %v, want the cap 10", w)
+	}
+	// By counting, the meaning of the weight (Terzaghi 1965; Priest 1993,
+	// memory):
+	// a set of parallel planes one metre apart along their pole, sampled by
+	// a line L long, is crossed about L·|cos δ| times, so the weighted count
+	// of its crossings is L, the count a line along the pole would make, to
+	// within one crossing's weight. The crossings are counted by walking
+	// the line in 1 cm steps, not from the formula; seeded random planes and
+	// lines. Below the cap a weight is never short by more than that; at
+	// the cap the line's count stays short of L.
+	const (
+		length = 200.0 // m
+		step   = 0.01  // m, less than the 1 m least spacing along a line
+	)
+	rng := rand.New(rand.NewPCG(61, 62))
+	unit := func() r3.Vec {
+		return r3.Unit(r3.Vec{X: rng.NormFloat64(), Y: rng.NormFloat64(), Z: rng.NormFloat64()})
+	}
+	for i := range 300 {
+		pole, ln := unit(), unit()
+		crossings, slab := 0, math.Floor(0.5)
+		for k := 1; k <= int(length/step); k++ {
+			if sl := math.Floor(r3.Dot(pole, r3.Scale(float64(k)*step, ln)) + 0.5); sl != slab {
+				crossings, slab = crossings+1, sl
+			}
+		}
+		w := TerzaghiWeight(pole, ln, DefaultMaxWeight)
+		switch {
+		case w < DefaultMaxWeight && math.Abs(w*float64(crossings)-length) > w:
+			t.Errorf("case %d: %d crossings of weight %v make %v, want %v within one weight", i, crossings, w, w*float64(crossings), length)
+		case w == DefaultMaxWeight && w*float64(crossings) > length+w:
+			t.Errorf("case %d: capped weight %v over %d crossings makes %v, more than %v", i, w, crossings, w*float64(crossings), length)
+		}
 	}
 }
 

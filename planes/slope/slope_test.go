@@ -2,6 +2,7 @@ package slope
 
 import (
 	"cleft/insitu"
+	"cleft/insitu/geom"
 	"cleft/planes"
 	"math"
 	"testing"
@@ -196,9 +197,30 @@ func TestPlanarBlock(t *testing.T) {
 	if zw := bw.WaterDepthToFail(0.01, 38); math.IsNaN(zw) || !scalar.EqualWithinAbs(bw.FS(0.01, 38, zw), 1, fsTol) {
 		t.Errorf("water depth to fail %v gives FS %v", zw, bw.FS(0.01, 38, zw))
 	}
-	// Critical crack depth (Hoek & Bray 1981, memory): z/H = 1 − √(cot ψf tan ψp).
-	if zc := CriticalCrackDepth(h, psiF, psiP); !scalar.EqualWithinAbs(zc/h, 1-math.Sqrt(cot(psiF)*math.Tan(psiP*math.Pi/180)), tol) {
-		t.Errorf("critical crack depth %v", zc)
+	// Critical crack depth (Hoek & Bray 1981, memory): z/H = 1 − √(cot ψf tan ψp),
+	// checked by what it means, not by the formula typed again: it is the
+	// depth of a dry crack that leaves the least factor of safety with
+	// cohesion. Derived: dry, FS = c·A/(W sin ψp) + tan φ/tan ψp is least where
+	// A/W ∝ (1 − u)/((1 − u²) cot ψp − cot ψf), u = z/H, is least, and its
+	// derivative vanishes at (1 − u)² = cot ψf tan ψp. Found here by
+	// golden-section search on the blocks' own FS, between no crack and the
+	// crack that meets the plane at the crest, z = H(1 − cot ψf tan ψp), for
+	// this face and a flatter one.
+	const crackTol = 1e-5 // m: a flat minimum is located to about √ε of the slope's height
+	for _, g := range []struct{ psiF, psiP float64 }{{psiF, psiP}, {50, 30}} {
+		fsAt := func(z float64) float64 {
+			b, err := NewPlanarBlock(h, g.psiF, 0, g.psiP, z, true, gamma)
+			if err != nil {
+				t.Fatalf("crack %v m: %v", z, err)
+			}
+			return b.FS(0.05, 30, 0)
+		}
+		atCrest := h * (1 - cot(g.psiF)*math.Tan(g.psiP*math.Pi/180))
+		z, _ := geom.GoldenMax(func(z float64) float64 { return -fsAt(z) }, 0.01*h, 0.99*atCrest, 1e-9)
+		if zc := CriticalCrackDepth(h, g.psiF, g.psiP); !scalar.EqualWithinAbs(zc, z, crackTol) {
+			t.Errorf("face %v°, plane %v°: critical crack depth %v m, least FS at %v m", g.psiF, g.psiP, zc, z)
+
+		}
 	}
 	if _, err := NewPlanarBlock(h, psiF, 0, psiP, 25, true, gamma); err == nil {
 		t.Error("a crack meeting the plane in front of the crest was accepted")
