@@ -12,12 +12,13 @@ import (
 )
 
 func TestApparentDip(t *testing.T) {
-	// Common practice: tan α = tan δ · cos β.
+	// Common practice: tan α = tan δ · cos β. Derived for 60/120 along 150
+	// (β = 30°): tan α = √3·(√3/2) = 3/2, α = atan 1.5 = 56.3099°.
 	const angleTol = 1e-9 // degrees
 	o := planes.MustNew(60, 120)
 	for _, c := range []struct{ az, want float64 }{
 		{120, 60}, {30, 0}, {210, 0}, {300, -60},
-		{150, math.Atan(math.Tan(60*math.Pi/180)*math.Cos(30*math.Pi/180)) * 180 / math.Pi},
+		{150, math.Atan(1.5) * 180 / math.Pi},
 	} {
 		if got := ApparentDip(o, c.az); !scalar.EqualWithinAbs(got, c.want, angleTol) {
 			t.Errorf("apparent dip along %v = %v, want %v", c.az, got, c.want)
