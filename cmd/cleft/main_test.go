@@ -266,7 +266,7 @@ func TestResolveOutIsAtomic(t *testing.T) {
 	in := genPlanes(5000, false) + "BAD,95,10,100\n"
 	out := filepath.Join(t.TempDir(), "out.csv")
 	code, _, stderr := cleft(t, in, "resolve", site, "--planes", "-", "--out", out)
-	if code != 1 || !strings.Contains(stderr, "standard input:5002: dip (column 2): 95 is outside") {
+	if code != 1 || stderr != message("standard input:5002: dip (column 2): 95 is outside [0, 90]° (dip is measured down from the horizontal)", "") {
 		t.Errorf("exit %d, stderr %q", code, stderr)
 	}
 	if _, err := os.Stat(out); !os.IsNotExist(err) {
@@ -308,7 +308,7 @@ func TestExampleWritesAndRefusesOverwrite(t *testing.T) {
 	if code, _, stderr := cleft(t, "", "example", dir); code != 0 {
 		t.Fatalf("exit %d: %s", code, stderr)
 	}
-	if code, _, stderr := cleft(t, "", "example", dir); code != 1 || !strings.Contains(stderr, "exists") {
+	if code, _, stderr := cleft(t, "", "example", dir); code != 1 || stderr != message("DIR/site.yaml exists: not overwritten (use --force)", dir) {
 		t.Errorf("second run: exit %d, %q; want a refusal", code, stderr)
 	}
 	if code, _, stderr := cleft(t, "", "assess", filepath.Join(dir, "site.yaml"), "--out", filepath.Join(dir, "out")); code != 0 {

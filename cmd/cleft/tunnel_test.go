@@ -109,18 +109,18 @@ func TestTunnelInput(t *testing.T) {
 	}
 	dir := t.TempDir()
 	for _, c := range []struct{ tunnel, want string }{
-		{strings.Replace(good, "{from: 100, to: 250", "{from: 120, to: 250", 1), "a gap in the alignment between chainage 100 and 120 m"},
-		{strings.Replace(good, "{from: 100, to: 250", "{from: 90, to: 250", 1), "legs overlap between chainage 90 and 100 m"},
-		{strings.Replace(good, "[250, 30]", "[200, 30]", 1), "station at chainage 240 m lies outside the cover profile"},
-		{strings.Replace(good, "rock: {ucs: 80}", "rock: {poisson: 0.2}", 1), `missing required key "ucs"`},
-		{good + "  sets: [Z9]\n", `no plane or set is named "Z9"`},
-		{strings.Replace(good, "[100, 60], [250, 30]", "[100, 60], [90, 30]", 1), "chainages must increase"},
+		{strings.Replace(good, "{from: 100, to: 250", "{from: 120, to: 250", 1), "DIR/t.yaml:10: tunnel.alignment[1]: a gap in the alignment between chainage 100 and 120 m: legs must join"},
+		{strings.Replace(good, "{from: 100, to: 250", "{from: 90, to: 250", 1), "DIR/t.yaml:10: tunnel.alignment[1]: legs overlap between chainage 90 and 100 m: each leg must start where the last ended"},
+		{strings.Replace(good, "[250, 30]", "[200, 30]", 1), "DIR/t.yaml: tunnel.cover: station at chainage 240 m lies outside the cover profile (0 to 200 m)"},
+		{strings.Replace(good, "rock: {ucs: 80}", "rock: {poisson: 0.2}", 1), "DIR/t.yaml:13: tunnel.rock: missing required key \"ucs\" (MPa, uniaxial compressive strength of the intact rock)"},
+		{good + "  sets: [Z9]\n", "DIR/t.yaml: tunnel.sets: no plane or set is named \"Z9\"; there are: A"},
+		{strings.Replace(good, "[100, 60], [250, 30]", "[100, 60], [90, 30]", 1), "DIR/t.yaml:11: tunnel.cover: chainages must increase: 90 after 100"},
 	} {
 		p := filepath.Join(dir, "t.yaml")
 		os.WriteFile(p, []byte(base+c.tunnel), 0o644)
 		code, _, stderr := cleft(t, "", "tunnel", p)
-		if code != 1 || !strings.Contains(stderr, c.want) {
-			t.Errorf("exit %d, %q; want %q", code, stderr, c.want)
+		if want := message(c.want, dir); code != 1 || stderr != want {
+			t.Errorf("exit %d, %q; want %q", code, stderr, want)
 		}
 	}
 }
