@@ -207,7 +207,10 @@ func TestPlanarBlock(t *testing.T) {
 	// golden-section search on the blocks' own FS, between no crack and the
 	// crack that meets the plane at the crest, z = H(1 − cot ψf tan ψp), for
 	// this face and a flatter one.
-	const crackTol = 1e-5 // m: the search finds a flat minimum to about 2e-7 m here
+	const (
+		crackTol  = 1e-5 // m: the search finds a flat minimum to about 2e-7 m here
+		searchTol = 1e-9 // m: the bracket the search narrows to
+	)
 	for _, g := range []struct{ psiF, psiP float64 }{{psiF, psiP}, {50, 30}} {
 		fsAt := func(z float64) float64 {
 			b, err := NewPlanarBlock(h, g.psiF, 0, g.psiP, z, true, gamma)
@@ -217,7 +220,7 @@ func TestPlanarBlock(t *testing.T) {
 			return b.FS(0.05, 30, 0)
 		}
 		atCrest := h * (1 - cot(g.psiF)*math.Tan(g.psiP*math.Pi/180))
-		z, _ := geom.GoldenMax(func(z float64) float64 { return -fsAt(z) }, 0.01*h, 0.99*atCrest, 1e-9)
+		z, _ := geom.GoldenMax(func(z float64) float64 { return -fsAt(z) }, 0.01*h, 0.99*atCrest, searchTol)
 		if zc := CriticalCrackDepth(h, g.psiF, g.psiP); !scalar.EqualWithinAbs(zc, z, crackTol) {
 			t.Errorf("face %v°, plane %v°: critical crack depth %v m, least FS at %v m", g.psiF, g.psiP, zc, z)
 		}
