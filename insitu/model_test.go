@@ -12,7 +12,8 @@ import (
 func TestDensityGradient(t *testing.T) {
 	// Common practice: 2700 kg/m³ rock gives a lithostatic gradient of about
 	// 0.0265 MPa/m; water 1000 kg/m³ gives 0.00981 MPa/m.
-	if got := DensityGradient(2700); !scalar.EqualWithinAbs(got, 0.0265, 0.00005) {
+	const readTol = 0.00005 // MPa/m: half a unit in the 4th decimal of 0.0265
+	if got := DensityGradient(2700); !scalar.EqualWithinAbs(got, 0.0265, readTol) {
 		t.Errorf("DensityGradient(2700) = %v, want ≈ 0.0265", got)
 	}
 	if got := DensityGradient(1000); !scalar.EqualWithinAbs(got, Hydrostatic, tol) {
@@ -35,7 +36,7 @@ func TestSheorey(t *testing.T) {
 	}
 	for _, z := range []float64{10, 500, 1000, 3000} {
 		sh, _, sv := m.Magnitudes(z)
-		if !scalar.EqualWithinAbsOrRel(sh, SheoreyK(50, z)*sv, 1e-12, 1e-12) {
+		if !scalar.EqualWithinAbsOrRel(sh, SheoreyK(50, z)*sv, tol, tol) {
 			t.Errorf("z = %v: Sh = %v, want k·Sv = %v", z, sh, SheoreyK(50, z)*sv)
 		}
 	}
@@ -64,8 +65,12 @@ func TestGradientModel(t *testing.T) {
 		t.Errorf("tensor = %+v, want %+v", s.Total, want)
 	}
 	ref := s.Total.Principal()
+	const (
+		valueTol = 1e-9 // MPa
+		axisTol  = 1e-6 // degrees between axes
+	)
 	for i := range 3 {
-		if !scalar.EqualWithinAbs(s.Principal.Values[i], ref.Values[i], 1e-9) || geom.AxialAngle(s.Principal.Axes[i], ref.Axes[i]) > 1e-6 {
+		if !scalar.EqualWithinAbs(s.Principal.Values[i], ref.Values[i], valueTol) || geom.AxialAngle(s.Principal.Axes[i], ref.Axes[i]) > axisTol {
 			t.Errorf("principal %d = %v %v, want %v %v", i, s.Principal.Values[i], s.Principal.Axis(i), ref.Values[i], ref.Axis(i))
 		}
 	}
@@ -118,7 +123,7 @@ func TestMeasuredModel(t *testing.T) {
 	s := m.At(200)
 	want := ref.Principal()
 	for i := range 3 {
-		if !scalar.EqualWithinAbs(s.Principal.Values[i], want.Values[i]/2, 1e-12) {
+		if !scalar.EqualWithinAbs(s.Principal.Values[i], want.Values[i]/2, tol) {
 			t.Errorf("σ%d at half depth = %v, want %v", i+1, s.Principal.Values[i], want.Values[i]/2)
 		}
 	}

@@ -9,18 +9,19 @@ import (
 )
 
 func TestFromPrincipal(t *testing.T) {
+	const angleTol = 1e-9 // degrees
 	t.Run("orthogonal axes kept, order sorted", func(t *testing.T) {
 		p, fit, err := FromPrincipal([3]float64{20, 35, 12}, [3]geom.Line{{Trend: 90, Plunge: 0}, {Trend: 0, Plunge: 0}, {Trend: 0, Plunge: 90}})
 		if err != nil {
 			t.Fatal(err)
 		}
-		if fit.Misfit > 1e-9 || fit.Moved > 1e-9 {
+		if fit.Misfit > angleTol || fit.Moved > angleTol {
 			t.Errorf("fit = %+v, want zero", fit)
 		}
 		if p.Values != [3]float64{35, 20, 12} {
 			t.Errorf("values = %v", p.Values)
 		}
-		if a := p.Axis(0); geom.AxialAngle(a.Vec(), geom.Line{Trend: 0, Plunge: 0}.Vec()) > 1e-9 {
+		if a := p.Axis(0); geom.AxialAngle(a.Vec(), geom.Line{Trend: 0, Plunge: 0}.Vec()) > angleTol {
 			t.Errorf("σ1 axis = %v, want 000/00", a)
 		}
 	})
@@ -29,7 +30,7 @@ func TestFromPrincipal(t *testing.T) {
 		if err != nil {
 			t.Fatal(err)
 		}
-		if !scalar.EqualWithinAbs(fit.Misfit, 1.5, 1e-9) || fit.Moved <= 0 || fit.Moved > 1.5 {
+		if !scalar.EqualWithinAbs(fit.Misfit, 1.5, angleTol) || fit.Moved <= 0 || fit.Moved > 1.5 {
 			t.Errorf("fit = %+v, want misfit 1.5 and a move in (0, 1.5]", fit)
 		}
 	})
@@ -52,6 +53,10 @@ func TestShape(t *testing.T) {
 }
 
 func TestRegimeAndAPhi(t *testing.T) {
+	const (
+		shapeTol = 1e-9 // φ and Aφ, both in [0, 3]
+		angleTol = 1e-9 // degrees
+	)
 	cases := []struct {
 		name         string
 		shmax, shmin float64
@@ -71,10 +76,10 @@ func TestRegimeAndAPhi(t *testing.T) {
 			if f.Regime != c.want || !f.Andersonian() {
 				t.Errorf("regime = %v (tilt %v), want %v", f.Regime, f.Tilt, c.want)
 			}
-			if phi := p.Shape(); !scalar.EqualWithinAbs(phi, c.phi, 1e-9) {
+			if phi := p.Shape(); !scalar.EqualWithinAbs(phi, c.phi, shapeTol) {
 				t.Errorf("φ = %v, want %v", phi, c.phi)
 			}
-			if a := APhi(f.Regime, p.Shape()); !scalar.EqualWithinAbs(a, c.aphi, 1e-9) {
+			if a := APhi(f.Regime, p.Shape()); !scalar.EqualWithinAbs(a, c.aphi, shapeTol) {
 				t.Errorf("Aφ = %v, want %v", a, c.aphi)
 			}
 		})
@@ -85,7 +90,7 @@ func TestRegimeAndAPhi(t *testing.T) {
 			t.Fatal(err)
 		}
 		f := p.Regime()
-		if f.Regime != Normal || !scalar.EqualWithinAbs(f.Tilt, 20, 1e-9) || f.Andersonian() {
+		if f.Regime != Normal || !scalar.EqualWithinAbs(f.Tilt, 20, angleTol) || f.Andersonian() {
 			t.Errorf("fit = %+v, want normal, tilt 20, not Andersonian", f)
 		}
 	})

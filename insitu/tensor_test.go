@@ -19,16 +19,20 @@ func TestShearerExample(t *testing.T) {
 	// stresses −35.86 and −64.14 MPa, the most compressive axis 67.5° from x.
 	// Converted at the edge: compression positive, NED, so σEE = 40, σNN = 60,
 	// σNE = 10. σDD = 20 keeps the vertical the least stress.
+	const (
+		readTol  = 0.005 // MPa: the book gives two decimals
+		angleTol = 1e-9  // degrees
+	)
 	s, err := Components(60, 40, 20, 10, 0, 0)
 	if err != nil {
 		t.Fatal(err)
 	}
 	p := s.Principal()
-	if !scalar.EqualWithinAbs(p.Values[0], 64.14, 0.005) || !scalar.EqualWithinAbs(p.Values[1], 35.86, 0.005) {
+	if !scalar.EqualWithinAbs(p.Values[0], 64.14, readTol) || !scalar.EqualWithinAbs(p.Values[1], 35.86, readTol) {
 		t.Errorf("principal = %v, want 64.14, 35.86", p.Values)
 	}
 	// 67.5° anticlockwise from east is the azimuth 22.5° (east of north).
-	if a := p.Axis(0); !scalar.EqualWithinAbs(a.Trend, 22.5, 1e-9) && !scalar.EqualWithinAbs(a.Trend, 202.5, 1e-9) {
+	if a := p.Axis(0); !scalar.EqualWithinAbs(a.Trend, 22.5, angleTol) && !scalar.EqualWithinAbs(a.Trend, 202.5, angleTol) {
 		t.Errorf("σ1 trend = %v, want 22.5 (or 202.5)", a.Trend)
 	}
 	// Traction on n = (1/√2, 1/√2) (east, north): (50/√2, 70/√2) MPa
@@ -51,6 +55,11 @@ func randomTensor(rng *rand.Rand) Tensor {
 }
 
 func TestPrincipalProperties(t *testing.T) {
+	const (
+		absTol      = 1e-10 // MPa, on components up to 80 MPa
+		relTol      = 1e-12
+		residualTol = 1e-9 // MPa: |σ·a − λ·a|
+	)
 	rng := rand.New(rand.NewPCG(1, 2))
 	for i := range 2000 {
 		s := randomTensor(rng)
@@ -58,21 +67,21 @@ func TestPrincipalProperties(t *testing.T) {
 		if !(p.Values[0] >= p.Values[1] && p.Values[1] >= p.Values[2]) {
 			t.Fatalf("case %d: values not descending: %v", i, p.Values)
 		}
-		if !scalar.EqualWithinAbsOrRel(p.Values[0]+p.Values[1]+p.Values[2], s.Trace(), 1e-10, 1e-12) {
+		if !scalar.EqualWithinAbsOrRel(p.Values[0]+p.Values[1]+p.Values[2], s.Trace(), absTol, relTol) {
 			t.Fatalf("case %d: trace not kept", i)
 		}
-		if d := r3.Dot(r3.Cross(p.Axes[0], p.Axes[1]), p.Axes[2]); !scalar.EqualWithinAbs(d, 1, 1e-10) {
+		if d := r3.Dot(r3.Cross(p.Axes[0], p.Axes[1]), p.Axes[2]); !scalar.EqualWithinAbs(d, 1, absTol) {
 			t.Fatalf("case %d: axes not a right-handed orthonormal triad: det %v", i, d)
 		}
 		back := p.Tensor()
 		for j, pair := range [][2]float64{{back.NN, s.NN}, {back.EE, s.EE}, {back.DD, s.DD}, {back.NE, s.NE}, {back.ND, s.ND}, {back.ED, s.ED}} {
-			if !scalar.EqualWithinAbs(pair[0], pair[1], 1e-10) {
+			if !scalar.EqualWithinAbs(pair[0], pair[1], absTol) {
 				t.Fatalf("case %d: component %d: reconstructed %v, want %v", i, j, pair[0], pair[1])
 			}
 		}
 		for k := range 3 {
 			// σ·a = λ·a for each axis.
-			if d := r3.Norm(r3.Sub(s.Apply(p.Axes[k]), r3.Scale(p.Values[k], p.Axes[k]))); d > 1e-9 {
+			if d := r3.Norm(r3.Sub(s.Apply(p.Axes[k]), r3.Scale(p.Values[k], p.Axes[k]))); d > residualTol {
 				t.Fatalf("case %d: axis %d not an eigenvector (residual %g)", i, k, d)
 			}
 		}
@@ -80,6 +89,12 @@ func TestPrincipalProperties(t *testing.T) {
 }
 
 func TestRotateKeepsInvariants(t *testing.T) {
+	const (
+		traceTol = 1e-9 // MPa
+		relTol   = 1e-12
+		i2Tol    = 1e-8 // MPa², the second invariant of components up to 80 MPa
+		i2RelTol = 1e-11
+	)
 	rng := rand.New(rand.NewPCG(3, 4))
 	for range 500 {
 		s := randomTensor(rng)
@@ -88,7 +103,7 @@ func TestRotateKeepsInvariants(t *testing.T) {
 		i2 := func(t Tensor) float64 {
 			return t.NN*t.EE + t.EE*t.DD + t.DD*t.NN - t.NE*t.NE - t.ND*t.ND - t.ED*t.ED
 		}
-		if !scalar.EqualWithinAbsOrRel(r.Trace(), s.Trace(), 1e-9, 1e-12) || !scalar.EqualWithinAbsOrRel(i2(r), i2(s), 1e-8, 1e-11) {
+		if !scalar.EqualWithinAbsOrRel(r.Trace(), s.Trace(), traceTol, relTol) || !scalar.EqualWithinAbsOrRel(i2(r), i2(s), i2Tol, i2RelTol) {
 			t.Fatalf("invariants changed: trace %v→%v, I2 %v→%v", s.Trace(), r.Trace(), i2(s), i2(r))
 		}
 	}
@@ -103,13 +118,17 @@ func TestComponentsRejectsNonFinite(t *testing.T) {
 }
 
 func TestAndersonianAxes(t *testing.T) {
+	const (
+		plungeTol = 1e-9 // degrees
+		axisTol   = 1e-7 // degrees
+	)
 	for _, az := range []float64{0, 30, 90, 135, 359.5} {
 		s := Andersonian(60, 40, 45, az)
 		p := s.Principal()
-		if a := p.Axis(0); a.Plunge > 1e-9 || geom.AxialAngle(a.Vec(), geom.Line{Trend: az, Plunge: 0}.Vec()) > 1e-7 {
+		if a := p.Axis(0); a.Plunge > plungeTol || geom.AxialAngle(a.Vec(), geom.Line{Trend: az, Plunge: 0}.Vec()) > axisTol {
 			t.Errorf("az %v: σ1 axis %v, want horizontal along %v", az, a, az)
 		}
-		if a := p.Axis(1); !scalar.EqualWithinAbs(a.Plunge, 90, 1e-7) {
+		if a := p.Axis(1); !scalar.EqualWithinAbs(a.Plunge, 90, axisTol) {
 			t.Errorf("az %v: σ2 axis %v, want vertical", az, a)
 		}
 	}

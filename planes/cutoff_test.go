@@ -60,7 +60,10 @@ func TestPressureToSlipIsTheLeastRiseThatEndsStability(t *testing.T) {
 	// has one larger than the rise that opens it, σn'/α. Seeded random
 	// states, planes, Biot coefficients and criteria, Coulomb with cohesion
 	// and Barton–Bandis.
-	const tol = 1e-9
+	const (
+		tol     = 1e-9 // MPa
+		minRise = 1e-3 // MPa: a ΔPp too small to step short of is not stepped
+	)
 	rng := rand.New(rand.NewPCG(111, 112))
 	for i := range 20000 {
 		ten := randomTensor(rng)
@@ -79,7 +82,7 @@ func TestPressureToSlipIsTheLeastRiseThatEndsStability(t *testing.T) {
 		case r.State == Stable && r.PressureToSlip < -tol:
 			t.Fatalf("case %d: stable with ΔPp %v < 0", i, r.PressureToSlip)
 		}
-		if r.State != Stable || r.PressureToSlip < 1e-3 {
+		if r.State != Stable || r.PressureToSlip < minRise {
 			continue
 		}
 		step := 1e-6 * (1 + r.PressureToSlip)
@@ -102,6 +105,7 @@ func TestBartonBandisNeverOpensBeforeSlipping(t *testing.T) {
 	// 1, with the 70° cap), so a sheared plane reaches it before it opens:
 	// the cut-off never governs while τ > 0, and with τ = 0 the rise to
 	// "slip" is the one that opens it (derived from the formula's limit).
+	const tol = 1e-12 // MPa
 	bb := &BartonBandis{JRC: 12, JCS: 60, Residual: 28}
 	rng := rand.New(rand.NewPCG(113, 114))
 	for range 2000 {
@@ -112,7 +116,7 @@ func TestBartonBandisNeverOpensBeforeSlipping(t *testing.T) {
 		}
 	}
 	r := Resolve(insitu.NewState(insitu.Andersonian(20, 20, 20, 0), 100, 7, 1), MustNew(30, 40), bb)
-	if !r.OpensFirst || !scalar.EqualWithinAbs(r.PressureToSlip, 13, 1e-12) {
+	if !r.OpensFirst || !scalar.EqualWithinAbs(r.PressureToSlip, 13, tol) {
 		t.Errorf("isotropic 20 MPa, Pp 7: ΔPp %v (opens first %v), want 13 by opening", r.PressureToSlip, r.OpensFirst)
 	}
 }
@@ -120,9 +124,10 @@ func TestBartonBandisNeverOpensBeforeSlipping(t *testing.T) {
 func TestPressureToSlipAtZeroShear(t *testing.T) {
 	// No shear: a cohesive plane cannot slip, it can only open, so the rise
 	// is σn'/α, not σn' + c/μ (derived: τ = 0 in the cut-off rule).
+	const tol = 1e-12 // MPa
 	s := insitu.NewState(insitu.Andersonian(20, 20, 20, 0), 100, 4, 0.8)
 	r := Resolve(s, MustNew(50, 10), &Coulomb{Mu: 0.6, Cohesion: 2})
-	if want := (20 - 0.8*4) / 0.8; !scalar.EqualWithinAbs(r.PressureToSlip, want, 1e-12) || !r.OpensFirst || !math.IsNaN(r.FactorOfSafety) {
+	if want := (20 - 0.8*4) / 0.8; !scalar.EqualWithinAbs(r.PressureToSlip, want, tol) || !r.OpensFirst || !math.IsNaN(r.FactorOfSafety) {
 		t.Errorf("ΔPp %v (opens first %v), FS %v; want %v by opening, no FS", r.PressureToSlip, r.OpensFirst, r.FactorOfSafety, want)
 	}
 }
@@ -132,11 +137,12 @@ func TestCutOffAtTheTie(t *testing.T) {
 	// vertical plane 90/045 under 6 MPa north–south and 4 east–west has its
 	// pole half way between them, σn = 5, τ = (6 − 4)/2 = 1 = c; ΔPp = 5,
 	// by opening, for either dip direction (rounding must not split them).
+	const tol = 1e-12 // MPa
 	c := &Coulomb{Mu: 0.6, Cohesion: 1}
 	s := insitu.NewState(insitu.Andersonian(6, 4, 5, 0), 200, 0, 1)
 	for _, dd := range []float64{45, 225} {
 		r := Resolve(s, MustNew(90, dd), c)
-		if !scalar.EqualWithinAbs(r.Shear, 1, 1e-12) || !scalar.EqualWithinAbs(r.PressureToSlip, 5, 1e-12) || !r.OpensFirst {
+		if !scalar.EqualWithinAbs(r.Shear, 1, tol) || !scalar.EqualWithinAbs(r.PressureToSlip, 5, tol) || !r.OpensFirst {
 			t.Errorf("90/%03.0f: τ %v, ΔPp %v, opens first %v; want 1, 5, true", dd, r.Shear, r.PressureToSlip, r.OpensFirst)
 		}
 	}

@@ -34,6 +34,7 @@ func TestOrientationExactEdges(t *testing.T) {
 }
 
 func TestOrientationFrames(t *testing.T) {
+	const angleTol = 1e-9 // degrees
 	for dip := 0.0; dip <= 90; dip += 15 {
 		for dd := 0.0; dd < 360; dd += 37 {
 			o := MustNew(dip, dd)
@@ -43,13 +44,13 @@ func TestOrientationFrames(t *testing.T) {
 			}
 			// Right-hand rule: the plane dips to the right of the strike, so
 			// in NED (z down) strike × down-dip is the downward pole.
-			if c := r3.Cross(s, d); r3.Norm(r3.Sub(c, n)) > 1e-12 {
+			if c := r3.Cross(s, d); r3.Norm(r3.Sub(c, n)) > tol {
 				t.Fatalf("%v: strike × down-dip = %v, want the pole %v", o, c, n)
 			}
-			if p := o.Pole(); geom.AxialAngle(p.Vec(), n) > 1e-9 {
+			if p := o.Pole(); geom.AxialAngle(p.Vec(), n) > angleTol {
 				t.Fatalf("%v: Pole() %v disagrees with Normal()", o, p)
 			}
-			if dl := o.DipLine(); geom.Angle(dl.Vec(), d) > 1e-9 {
+			if dl := o.DipLine(); geom.Angle(dl.Vec(), d) > angleTol {
 				t.Fatalf("%v: DipLine() %v disagrees with DownDip()", o, dl)
 			}
 		}
@@ -57,6 +58,7 @@ func TestOrientationFrames(t *testing.T) {
 }
 
 func TestOrientationConstructors(t *testing.T) {
+	const angleTol = 1e-9 // degrees
 	// Right-hand rule (common practice): strike 030, dip 60 dips to 120.
 	o, err := FromStrike(30, 60)
 	if err != nil || o.DipDirection() != 120 || o.Dip() != 60 || o.Strike() != 30 {
@@ -74,7 +76,7 @@ func TestOrientationConstructors(t *testing.T) {
 	if err != nil || o.Dip() != 65 || o.DipDirection() != 120 || o.String() != "65/120" {
 		t.Errorf("Parse = %v, %v", o, err)
 	}
-	if q := FromNormal(r3.Scale(-1, MustNew(65, 120).Normal())); !scalar.EqualWithinAbs(q.Dip(), 65, 1e-9) || !scalar.EqualWithinAbs(q.DipDirection(), 120, 1e-9) {
+	if q := FromNormal(r3.Scale(-1, MustNew(65, 120).Normal())); !scalar.EqualWithinAbs(q.Dip(), 65, angleTol) || !scalar.EqualWithinAbs(q.DipDirection(), 120, angleTol) {
 		t.Errorf("FromNormal(−pole) = %v, want 65/120", q)
 	}
 	for _, bad := range []struct {

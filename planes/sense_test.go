@@ -53,12 +53,13 @@ func TestVerticalPlaneDipSlip(t *testing.T) {
 	// hanging wall is the east block and t − σn·n = (0, 0, −5): up. For
 	// 90/270 the pole points east, the hanging wall is the west block and
 	// t − σn·n = (0, 0, +5): down. Both say the east side goes up.
+	const angleTol = 1e-9 // degrees
 	s := dryState(insitu.Tensor{NN: 20, EE: 20, DD: 20, ED: 5})
 	for _, c := range []struct {
 		dd, rake float64
 	}{{90, 90}, {270, -90}} {
 		r := Resolve(s, MustNew(90, c.dd), mu06)
-		if !scalar.EqualWithinAbs(r.Rake, c.rake, 1e-9) || r.Sense != WithSide(SideUp, East) || r.Sense.String() != "east-side-up" {
+		if !scalar.EqualWithinAbs(r.Rake, c.rake, angleTol) || r.Sense != WithSide(SideUp, East) || r.Sense.String() != "east-side-up" {
 			t.Errorf("90/%03.0f: rake %v, sense %q; want %v, east-side-up", c.dd, r.Rake, r.Sense, c.rake)
 		}
 		if !math.IsNaN(r.SlipTrend) {
@@ -80,7 +81,7 @@ func TestVerticalPlaneDipSlip(t *testing.T) {
 	s = dryState(insitu.Tensor{NN: 20, EE: 20, DD: 20, ED: 5, NE: 5})
 	for _, c := range []struct{ dd, rake float64 }{{90, 135}, {270, -135}} {
 		r := Resolve(s, MustNew(90, c.dd), mu06)
-		if r.Sense != WithSide(DextralSideUp, East) || !scalar.EqualWithinAbs(r.SlipTrend, 180, 1e-9) || !scalar.EqualWithinAbs(r.Rake, c.rake, 1e-9) {
+		if r.Sense != WithSide(DextralSideUp, East) || !scalar.EqualWithinAbs(r.SlipTrend, 180, angleTol) || !scalar.EqualWithinAbs(r.Rake, c.rake, angleTol) {
 			t.Errorf("90/%03.0f oblique: %q trend %v rake %v; want dextral-east-side-up, 180, %v", c.dd, r.Sense, r.SlipTrend, r.Rake, c.rake)
 		}
 	}
@@ -92,11 +93,12 @@ func TestHorizontalPlaneSlip(t *testing.T) {
 	// upper block's slip trend is given. Derived: with σND = 4 and σED = −3
 	// the pole (0, 0, 1) carries t − σn·n = (4, −3, 0), so the upper block
 	// moves towards atan2(−3, 4) = −36.87°, azimuth 323.13°.
+	const angleTol = 1e-9 // degrees
 	s := dryState(insitu.Tensor{NN: 20, EE: 15, DD: 25, ND: 4, ED: -3})
 	want := 360 - math.Atan2(3, 4)*geom.Deg
 	for _, dd := range []float64{0, 90, 180, 270, 33.3} {
 		r := Resolve(s, MustNew(0, dd), mu06)
-		if !math.IsNaN(r.Rake) || r.Sense != NoSlip || !scalar.EqualWithinAbs(r.SlipTrend, want, 1e-9) || !scalar.EqualWithinAbs(r.Shear, 5, 1e-12) {
+		if !math.IsNaN(r.Rake) || r.Sense != NoSlip || !scalar.EqualWithinAbs(r.SlipTrend, want, angleTol) || !scalar.EqualWithinAbs(r.Shear, 5, tol) {
 			t.Errorf("0/%03.0f: rake %v, sense %q, trend %v, τ %v; want none, none, %v, 5", dd, r.Rake, r.Sense, r.SlipTrend, r.Shear, want)
 		}
 	}
@@ -115,7 +117,10 @@ func TestAndersonianSlipTrends(t *testing.T) {
 	// its east block moves south-south-east, 150.5° (common practice: on a
 	// sinistral fault the far block moves to the left). The vertical planes
 	// are typed both ways: the trend is the east block's either way.
-	const mu = 0.6
+	const (
+		mu       = 0.6
+		angleTol = 1e-9 // degrees
+	)
 	a := insitu.OptimalAngle(mu)
 	for _, c := range []struct {
 		name             string
@@ -132,7 +137,7 @@ func TestAndersonianSlipTrends(t *testing.T) {
 	} {
 		t.Run(c.name, func(t *testing.T) {
 			r := Resolve(dryState(insitu.Andersonian(c.shmax, c.shmin, c.sv, 0)), MustNew(c.dip, c.dd), &Coulomb{Mu: mu})
-			if !scalar.EqualWithinAbs(r.SlipTrend, c.trend, 1e-9) || r.Sense != c.sense {
+			if !scalar.EqualWithinAbs(r.SlipTrend, c.trend, angleTol) || r.Sense != c.sense {
 				t.Errorf("trend %v (%q), want %v (%q)", r.SlipTrend, r.Sense, c.trend, c.sense)
 			}
 		})
@@ -145,7 +150,10 @@ func TestSlipTrendFollowsTheRake(t *testing.T) {
 	// slip trend (of the opposite block on a (near-)vertical plane typed
 	// with a dip direction in [180, 360)). Seeded random states and planes
 	// away from horizontal.
-	const tol = 1e-7
+	const (
+		tol           = 1e-7 // degrees
+		minHorizontal = 1e-6 // a slip this close to vertical has no trend to compare
+	)
 	rng := rand.New(rand.NewPCG(121, 122))
 	for i := range 5000 {
 		s := dryState(randomTensor(rng))
@@ -159,7 +167,7 @@ func TestSlipTrendFollowsTheRake(t *testing.T) {
 		if o.Dip() >= 90-NearVertical && o.DipDirection() >= 180 {
 			v = r3.Scale(-1, v)
 		}
-		if math.Hypot(v.X, v.Y) < 1e-6 {
+		if math.Hypot(v.X, v.Y) < minHorizontal {
 			continue
 		}
 		want := geom.Azimuth(math.Atan2(v.Y, v.X) * geom.Deg)
@@ -174,7 +182,10 @@ func TestSamePlaneTypedTwoWaysResolves(t *testing.T) {
 	// strike, is one plane (common practice): the same state, factor of
 	// safety, pressure to slip, sense and slip trend, whatever the criterion
 	// and pore pressure (seeded random states).
-	const tol = 1e-9
+	const (
+		tol      = 1e-9
+		trendTol = 1e-7 // degrees
+	)
 	rng := rand.New(rand.NewPCG(131, 132))
 	for i := range 5000 {
 		s := insitu.NewState(randomTensor(rng), 100, rng.Float64()*50, 0.6+rng.Float64()*0.4)
@@ -193,7 +204,7 @@ func TestSamePlaneTypedTwoWaysResolves(t *testing.T) {
 			case a.State != b.State, a.Sense != b.Sense, a.OpensFirst != b.OpensFirst,
 				!same(a.FactorOfSafety, b.FactorOfSafety), !same(a.PressureToSlip, b.PressureToSlip):
 				t.Fatalf("case %d, %v and %v: %+v\n%+v", i, p[0], p[1], a, b)
-			case !(math.IsNaN(a.SlipTrend) && math.IsNaN(b.SlipTrend)) && math.Abs(math.Remainder(a.SlipTrend-b.SlipTrend, 360)) > 1e-7:
+			case !(math.IsNaN(a.SlipTrend) && math.IsNaN(b.SlipTrend)) && math.Abs(math.Remainder(a.SlipTrend-b.SlipTrend, 360)) > trendTol:
 				t.Fatalf("case %d, %v and %v: slip trends %v and %v", i, p[0], p[1], a.SlipTrend, b.SlipTrend)
 			}
 		}

@@ -16,6 +16,7 @@ func demoState() insitu.State {
 
 func TestFieldEqualsResolve(t *testing.T) {
 	// Every node holds planes.Resolve for the plane whose pole projects there.
+	const tol = 1e-12
 	s := demoState()
 	c := &planes.Coulomb{Mu: 0.6}
 	for _, p := range []Projection{EqualArea, EqualAngle} {
@@ -37,7 +38,7 @@ func TestFieldEqualsResolve(t *testing.T) {
 					r := planes.Resolve(s, o, c)
 					want := m.Value(&r)
 					got := f.Values[j*f.N+i]
-					if !(math.IsNaN(want) && math.IsNaN(got)) && !scalar.EqualWithinAbsOrRel(got, want, 1e-12, 1e-12) {
+					if !(math.IsNaN(want) && math.IsNaN(got)) && !scalar.EqualWithinAbsOrRel(got, want, tol, tol) {
 						t.Fatalf("%v %v node (%d, %d): %v, want %v", p, m, i, j, got, want)
 					}
 				}
@@ -49,16 +50,18 @@ func TestFieldEqualsResolve(t *testing.T) {
 func TestFieldRange(t *testing.T) {
 	// Slip tendency over all orientations peaks at Ts,max (Morris et al. 1996):
 	// (σ1'−σ3')/(2√(σ1'σ3')) for this state.
+	const tol = 1e-12
 	s := demoState()
 	f := NewField(s, &planes.Coulomb{Mu: 0.6}, SlipTendency, EqualArea, 301)
 	e := s.EffectivePrincipal()
 	tsmax := (e[0] - e[2]) / (2 * math.Sqrt(e[0]*e[2]))
-	if f.Max > tsmax+1e-12 || f.Max < 0.99*tsmax || f.Min < 0 {
+	if f.Max > tsmax+tol || f.Max < 0.99*tsmax || f.Min < 0 {
 		t.Errorf("field range [%v, %v], want up to Ts,max = %v", f.Min, f.Max, tsmax)
 	}
 }
 
 func TestContourOfRadialField(t *testing.T) {
+	const gridTol = 0.01 // radius: contours interpolate r² linearly across a grid cell
 	f := &Field{N: 81}
 	vals := make([]float64, f.N*f.N)
 	for j := range f.N {
@@ -81,7 +84,7 @@ func TestContourOfRadialField(t *testing.T) {
 		}
 		for _, s := range segs {
 			for _, q := range []Point{s.A, s.B} {
-				if d := math.Hypot(q.X, q.Y); math.Abs(d-r) > 0.01 {
+				if d := math.Hypot(q.X, q.Y); math.Abs(d-r) > gridTol {
 					t.Fatalf("level %v: point at radius %v, want %v", level, d, r)
 				}
 			}

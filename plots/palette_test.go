@@ -85,8 +85,9 @@ func oklchToSRGBReference(l, c, h float64) ([3]uint8, bool) {
 	}
 	var out [3]uint8
 	ok := true
+	const gamutTol = 1e-9 // linear sRGB this far outside [0, 1] is rounding, not out of gamut
 	for i, v := range lin {
-		if v < -1e-9 || v > 1+1e-9 {
+		if v < -gamutTol || v > 1+gamutTol {
 			ok = false
 		}
 		v = math.Max(0, math.Min(1, v))

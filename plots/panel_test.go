@@ -32,6 +32,7 @@ func TestLogTicks(t *testing.T) {
 	// a logarithmic axis); with less, fewer, never closer than the gap,
 	// and 1 always among them.
 	a := axisScale{lo: 0.5, hi: 10, log: true}
+	const tol = 1e-12
 	t.Run("room", func(t *testing.T) {
 		got := logTicks(a, 300, 10)
 		want := []float64{0.5, 1, 2, 5, 10}
@@ -39,7 +40,7 @@ func TestLogTicks(t *testing.T) {
 			t.Fatalf("%v, want %v", got, want)
 		}
 		for i := range want {
-			if math.Abs(got[i].v-want[i]) > 1e-12 {
+			if math.Abs(got[i].v-want[i]) > tol {
 				t.Errorf("tick %d at %v, want %v", i, got[i].v, want[i])
 			}
 		}
@@ -65,6 +66,12 @@ func TestLinearTicks(t *testing.T) {
 	// Seeded random ranges and axis lengths: ticks lie in the range, at
 	// least the gap apart, at a step of 1, 2 or 5 × 10ⁿ, and there is one
 	// at least.
+	const (
+		rangeTol = 1e-9 // relative to the range
+		stepTol  = 1e-6 // on the step's mantissa
+		// decadeTol keeps log10 of an exact power of ten from rounding down a decade.
+		decadeTol = 1e-9
+	)
 	rng := rand.New(rand.NewPCG(7, 11))
 	for trial := range 200 {
 		lo := (rng.Float64() - 0.5) * math.Pow(10, 4*rng.Float64())
@@ -81,14 +88,14 @@ func TestLinearTicks(t *testing.T) {
 			t.Errorf("trial %d: ticks %v closer than %v on %v", trial, ts, gap, n)
 		}
 		for _, x := range ts {
-			if x.v < lo-1e-9*(hi-lo) || x.v > hi+1e-9*(hi-lo) {
+			if x.v < lo-rangeTol*(hi-lo) || x.v > hi+rangeTol*(hi-lo) {
 				t.Errorf("trial %d: tick %v outside [%v, %v]", trial, x.v, lo, hi)
 			}
 		}
 		if len(ts) > 1 {
 			step := ts[1].v - ts[0].v
-			m := step / math.Pow(10, math.Floor(math.Log10(step)+1e-9))
-			if math.Abs(m-1) > 1e-6 && math.Abs(m-2) > 1e-6 && math.Abs(m-5) > 1e-6 {
+			m := step / math.Pow(10, math.Floor(math.Log10(step)+decadeTol))
+			if math.Abs(m-1) > stepTol && math.Abs(m-2) > stepTol && math.Abs(m-5) > stepTol {
 				t.Errorf("trial %d: step %v is not 1, 2 or 5 × 10ⁿ", trial, step)
 			}
 		}
@@ -101,8 +108,9 @@ func TestFitText(t *testing.T) {
 		t.Errorf("short name changed to %q", got)
 	}
 	long := "a-very-long-plane-name-from-the-table"
+	const widthTol = 1e-6 // pt
 	got := fitText(sty, long, 40)
-	if textWidth(sty, got) > 40+1e-6 || []rune(got)[len([]rune(got))-1] != '…' {
+	if textWidth(sty, got) > 40+widthTol || []rune(got)[len([]rune(got))-1] != '…' {
 		t.Errorf("fitText = %q (%v wide), want ≤ 40 pt ending in …", got, textWidth(sty, got))
 	}
 }

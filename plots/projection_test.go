@@ -18,6 +18,10 @@ func TestProjectionRadii(t *testing.T) {
 	// equal-area r = √2·R·sin(θ/2), equal-angle r = R·tan(θ/2), θ = 90° − plunge.
 	// Derived r/R at plunge 30°, 45°, 60°: equal-area 0.707107, 0.541196,
 	// 0.366025; equal-angle 0.577350, 0.414214, 0.267949.
+	const (
+		sixDecimals = 5e-7 // r/R given to six decimals
+		angleTol    = 1e-9 // degrees
+	)
 	cases := []struct {
 		plunge, area, angle float64
 	}{
@@ -35,12 +39,12 @@ func TestProjectionRadii(t *testing.T) {
 				want float64
 			}{{EqualArea, c.area}, {EqualAngle, c.angle}} {
 				pt := pc.p.Project(l)
-				if r := math.Hypot(pt.X, pt.Y); !scalar.EqualWithinAbs(r, pc.want, 5e-7) {
+				if r := math.Hypot(pt.X, pt.Y); !scalar.EqualWithinAbs(r, pc.want, sixDecimals) {
 					t.Errorf("%v plunge %v: r = %v, want %v", pc.p, c.plunge, r, pc.want)
 				}
 				if c.plunge < 90 {
 					// x east, y north: the point lies at the trend, clockwise from north.
-					if az := geom.Azimuth(math.Atan2(pt.X, pt.Y) * 180 / math.Pi); math.Abs(math.Remainder(az-trend, 360)) > 1e-9 {
+					if az := geom.Azimuth(math.Atan2(pt.X, pt.Y) * 180 / math.Pi); math.Abs(math.Remainder(az-trend, 360)) > angleTol {
 						t.Errorf("%v trend %v: plotted at azimuth %v", pc.p, trend, az)
 					}
 				}
@@ -50,12 +54,13 @@ func TestProjectionRadii(t *testing.T) {
 }
 
 func TestProjectionRoundTrip(t *testing.T) {
+	const angleTol = 1e-10 // degrees
 	rng := rand.New(rand.NewPCG(31, 32))
 	for _, p := range []Projection{EqualArea, EqualAngle} {
 		for range 5000 {
 			l := geom.Line{Trend: rng.Float64() * 360, Plunge: 0.01 + rng.Float64()*89.98}
 			back, ok := p.Inverse(p.Project(l))
-			if !ok || geom.Angle(back.Vec(), l.Vec()) > 1e-10 {
+			if !ok || geom.Angle(back.Vec(), l.Vec()) > angleTol {
 				t.Fatalf("%v: %v → %v", p, l, back)
 			}
 		}
@@ -73,14 +78,14 @@ func TestGreatCircle(t *testing.T) {
 			pts := p.GreatCircle(o, 180)
 			first, last := pts[0], pts[len(pts)-1]
 			s := p.Project(geom.Line{Trend: o.Strike(), Plunge: 0})
-			if !near(first, s, 1e-12) || !near(last, Point{-s.X, -s.Y}, 1e-12) {
+			if !near(first, s, tol) || !near(last, Point{-s.X, -s.Y}, tol) {
 				t.Errorf("%v %v: ends %v, %v; want ±%v", p, o, first, last, s)
 			}
-			if d := p.Project(o.DipLine()); !near(pts[90], d, 1e-12) {
+			if d := p.Project(o.DipLine()); !near(pts[90], d, tol) {
 				t.Errorf("%v %v: middle %v, want the dip line at %v", p, o, pts[90], d)
 			}
 			for _, q := range pts {
-				if math.Hypot(q.X, q.Y) > 1+1e-12 {
+				if math.Hypot(q.X, q.Y) > 1+tol {
 					t.Errorf("%v %v: point %v outside the primitive", p, o, q)
 				}
 			}
@@ -111,7 +116,8 @@ func TestSmallCircle(t *testing.T) {
 					}
 					// Every sampled point is α from the axis (axially); the
 					// two points added on the primitive are within a sample step.
-					if a := geom.AxialAngle(l.Vec(), c.axis.Vec()); math.Abs(a-c.alpha) > 1.1 {
+					const stepTol = 1.1 // degrees: a little over the 1° step of 360 samples
+					if a := geom.AxialAngle(l.Vec(), c.axis.Vec()); math.Abs(a-c.alpha) > stepTol {
 						t.Errorf("%v %v: point at %v° from the axis, want %v", p, c.axis, a, c.alpha)
 					}
 				}

@@ -52,7 +52,8 @@ func TestMarkersTakeTurns(t *testing.T) {
 				}
 			}
 			step := c.width / float64(max(1, c.stations-1))
-			if float64(stride)*step < c.gap-1e-9 {
+			const tol = 1e-9 // pt
+			if float64(stride)*step < c.gap-tol {
 				t.Errorf("stride %d: markers %.1f pt apart, want %v", stride, float64(stride)*step, c.gap)
 			}
 		})

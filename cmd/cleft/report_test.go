@@ -241,7 +241,8 @@ func TestReportInBrowser(t *testing.T) {
 	if err != nil {
 		t.Fatalf("screenshot: %v", err)
 	}
-	if frac := inked(img); frac < 0.02 {
+	const minInk = 0.02 // a fraction of the pixels: less is a blank page
+	if frac := inked(img); frac < minInk {
 		t.Errorf("screenshot is %.1f%% ink: blank?", 100*frac)
 	}
 	st, err := os.Stat(pdfFile)

@@ -60,18 +60,18 @@ func TestSetsBadInput(t *testing.T) {
 		code       int
 		args       []string
 	}{
-		{write("dip.csv", "dip,dip_direction\n40,10\n95,20\n"), "dip.csv:3: dip (column 1): 95 is outside [0, 90]°", 1, nil},
-		{write("nocol.csv", "dip,azimuth\n40,10\n"), `nocol.csv:1: the header has no "dip_direction" column`, 1, nil},
-		{write("empty.csv", ""), "empty.csv: empty: want a header row", 1, nil},
-		{write("header.csv", "dip,dip_direction\n"), "header.csv: no readings", 1, nil},
-		{write("weight.csv", "dip,dip_direction,weight\n40,10,0\n"), "weight.csv:2: weight (column 3): 0: a weight must be in (0, 1000]", 1, nil},
-		{write("few.csv", "dip,dip_direction\n40,10\n50,20\n"), "2 readings cannot make 3 sets", 1, []string{"--sets", "3"}},
-		{write("ok.csv", "dip,dip_direction\n40,10\n50,20\n"), "--line", 2, []string{"--line", "north"}},
-		{write("ok2.csv", "dip,dip_direction\n40,10\n50,20\n"), "--seed", 2, []string{"--seed", "95/10"}},
+		{write("dip.csv", "dip,dip_direction\n40,10\n95,20\n"), "DIR/dip.csv:3: dip (column 1): 95 is outside [0, 90]° (dip is measured down from the horizontal)", 1, nil},
+		{write("nocol.csv", "dip,azimuth\n40,10\n"), "DIR/nocol.csv:1: the header has no \"dip_direction\" column (or strike, right-hand rule); it has: dip, azimuth", 1, nil},
+		{write("empty.csv", ""), "DIR/empty.csv: empty: want a header row naming the columns (name, dip, dip_direction, depth, …)", 1, nil},
+		{write("header.csv", "dip,dip_direction\n"), "DIR/header.csv: no readings: the table has a header but no rows", 1, nil},
+		{write("weight.csv", "dip,dip_direction,weight\n40,10,0\n"), "DIR/weight.csv:2: weight (column 3): 0: a weight must be in (0, 1000]", 1, nil},
+		{write("few.csv", "dip,dip_direction\n40,10\n50,20\n"), "DIR/few.csv: 2 readings cannot make 3 sets", 1, []string{"--sets", "3"}},
+		{write("ok.csv", "dip,dip_direction\n40,10\n50,20\n"), "--line \"north\": want TREND/PLUNGE in degrees, e.g. 120/10\nRun 'cleft sets --help' for usage.", 2, []string{"--line", "north"}},
+		{write("ok2.csv", "dip,dip_direction\n40,10\n50,20\n"), "--seed dip 95 is outside [0, 90]\nRun 'cleft sets --help' for usage.", 2, []string{"--seed", "95/10"}},
 	} {
 		code, _, stderr := cleft(t, "", append([]string{"sets", c.file}, c.args...)...)
-		if code != c.code || !strings.Contains(stderr, c.want) {
-			t.Errorf("%s %v: exit %d, %q; want %d and %q", filepath.Base(c.file), c.args, code, stderr, c.code, c.want)
+		if want := message(c.want, dir); code != c.code || stderr != want {
+			t.Errorf("%s %v: exit %d, %q; want %d and %q", filepath.Base(c.file), c.args, code, stderr, c.code, want)
 		}
 	}
 }
@@ -85,7 +85,7 @@ func TestReadingsOnlySite(t *testing.T) {
 	if code, out, stderr := cleft(t, "", "assess", p, "--out", filepath.Join(dir, "o")); code != 0 || !strings.Contains(out, "133 planes were screened") {
 		t.Errorf("assess: exit %d, %s %s", code, out, stderr)
 	}
-	if code, _, stderr := cleft(t, "", "resolve", p); code != 1 || !strings.Contains(stderr, "cleft assess groups into sets") {
+	if code, _, stderr := cleft(t, "", "resolve", p); code != 1 || stderr != message("DIR/s.yaml: no planes: the site has only readings_file:, which cleft assess groups into sets and resolves; give planes: or planes_file:, or --planes FILE.csv", dir) {
 		t.Errorf("resolve: exit %d, %s", code, stderr)
 	}
 }

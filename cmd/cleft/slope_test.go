@@ -78,28 +78,28 @@ func TestSlopeBadInput(t *testing.T) {
 	dir := t.TempDir()
 	base := "site: s\nstress:\n  vertical: {gradient: 0.026}\n  shmax: {ratio: 1.2, azimuth: 90}\n  shmin: {ratio: 0.7}\nplanes: [{name: A, dip: 40, dip_direction: 200, depth: 10}]\n"
 	for _, c := range []struct{ slope, want string }{
-		{"slope: {height: 30}", `slope: missing required key "face"`},
-		{"slope: {face: {dip: 65, dip_direction: 210}}", `missing required key "height"`},
-		{"slope: {face: {dip: 65, dip_direction: 210}, height: -3}", "slope.height: -3 is outside"},
-		{"slope: {face: {dip: 65, dip_direction: 210}, height: 30, lateral: 20}", `unknown key "lateral" (did you mean "lateral_limit"?)`},
-		{"slope: {face: {dip: 65, dip_direction: 210}, height: 30, tension_crack: {distance: 5, depth: 3}}", "give distance or depth, not both"},
-		{"slope: {face: {dip: 65, dip_direction: 210}, height: 30, water: {tension_crack_fill: [0, 1]}}", "tension_crack_fill was replaced by depths of water in m"},
-		{"slope: {face: {dip: 65, dip_direction: 210}, height: 30, water: [0, -2]}", "slope.water[1]: -2 is outside the allowed range [0, ∞) m"},
-		{"slope: {face: {dip: 65, dip_direction: 210}, height: 30, water: [0, half]}", `"half" is not one of: table, full`},
-		{"slope: {face: {dip: 65, dip_direction: 210}, height: 30, bolt: {per_metre: 0.1, plunge: 10, angle_to_plane: 30}}", "give plunge or angle_to_plane, not both"},
-		{"slope: {face: {dip: 65, dip_direction: 210}, height: 30, seismic: 1.2}", "slope.seismic: 1.2 is outside the allowed range [0, 1)"},
-		{"slope: {face: {dip: 65, dip_direction: 210}, height: 30, target_fs: 0}", "slope.target_fs: 0 is outside"},
+		{"slope: {height: 30}", "DIR/s.yaml:7: slope: missing required key \"face\" ({dip, dip_direction} of the cut face)"},
+		{"slope: {face: {dip: 65, dip_direction: 210}}", "DIR/s.yaml:7: slope: missing required key \"height\" (m, toe to crest)"},
+		{"slope: {face: {dip: 65, dip_direction: 210}, height: -3}", "DIR/s.yaml:7: slope.height: -3 is outside the allowed range (0, 20000] m"},
+		{"slope: {face: {dip: 65, dip_direction: 210}, height: 30, lateral: 20}", "DIR/s.yaml:7: slope.lateral: unknown key \"lateral\" (did you mean \"lateral_limit\"?); allowed here: face, top, height, friction_angle, lateral_limit, toppling_limit, unit_weight, water, tension_crack, bolt, seismic, target_fs, source"},
+		{"slope: {face: {dip: 65, dip_direction: 210}, height: 30, tension_crack: {distance: 5, depth: 3}}", "DIR/s.yaml:7: slope.tension_crack.depth: give distance or depth, not both"},
+		{"slope: {face: {dip: 65, dip_direction: 210}, height: 30, water: {tension_crack_fill: [0, 1]}}", "DIR/s.yaml:7: slope.water: want a list of water cases (m of water, table, full); tension_crack_fill was replaced by depths of water in m"},
+		{"slope: {face: {dip: 65, dip_direction: 210}, height: 30, water: [0, -2]}", "DIR/s.yaml:7: slope.water[1]: -2 is outside the allowed range [0, ∞) m"},
+		{"slope: {face: {dip: 65, dip_direction: 210}, height: 30, water: [0, half]}", "DIR/s.yaml:7: slope.water[1]: \"half\" is not one of: table, full"},
+		{"slope: {face: {dip: 65, dip_direction: 210}, height: 30, bolt: {per_metre: 0.1, plunge: 10, angle_to_plane: 30}}", "DIR/s.yaml:7: slope.bolt.angle_to_plane: give plunge or angle_to_plane, not both"},
+		{"slope: {face: {dip: 65, dip_direction: 210}, height: 30, seismic: 1.2}", "DIR/s.yaml:7: slope.seismic: 1.2 is outside the allowed range [0, 1)"},
+		{"slope: {face: {dip: 65, dip_direction: 210}, height: 30, target_fs: 0}", "DIR/s.yaml:7: slope.target_fs: 0 is outside the allowed range (0, ∞)"},
 	} {
 		p := filepath.Join(dir, "s.yaml")
 		os.WriteFile(p, []byte(base+c.slope+"\n"), 0o644)
 		code, _, stderr := cleft(t, "", "slope", p)
-		if code != 1 || !strings.Contains(stderr, c.want) {
-			t.Errorf("%s: exit %d, %q; want %q", c.slope, code, stderr, c.want)
+		if want := message(c.want, dir); code != 1 || stderr != want {
+			t.Errorf("%s: exit %d, %q; want %q", c.slope, code, stderr, want)
 		}
 	}
 	p := filepath.Join(dir, "none.yaml")
 	os.WriteFile(p, []byte(base), 0o644)
-	if code, _, stderr := cleft(t, "", "slope", p); code != 1 || !strings.Contains(stderr, "no slope: block") {
+	if code, _, stderr := cleft(t, "", "slope", p); code != 1 || stderr != message("DIR/none.yaml: no slope: block: give the face, height and the rest (see README, Rock slopes)", dir) {
 		t.Errorf("no slope block: exit %d, %q", code, stderr)
 	}
 }

@@ -47,7 +47,11 @@ func TestSinCosDegExactAtRightAngles(t *testing.T) {
 }
 
 func TestEigenDescending(t *testing.T) {
-	const tol = 1e-12
+	const (
+		tol      = 1e-12 // the triple product of unit vectors
+		valueTol = 1e-9  // eigenvalues of about 10–30
+		axisTol  = 1e-6  // degrees between axes
+	)
 	// A tensor built from known values and a known rotation must give them
 	// back, largest first, as a right-handed triad (derived).
 	rng := rand.New(rand.NewPCG(3, 4))
@@ -70,7 +74,7 @@ func TestEigenDescending(t *testing.T) {
 			t.Fatal("decomposition failed")
 		}
 		for i := range 3 {
-			if !scalar.EqualWithinAbs(v[i], vals[i], 1e-9) || AxialAngle(e[i], axes[i]) > 1e-6 {
+			if !scalar.EqualWithinAbs(v[i], vals[i], valueTol) || AxialAngle(e[i], axes[i]) > axisTol {
 				t.Fatalf("value %d: %v along %v, want %v along %v", i, v[i], e[i], vals[i], axes[i])
 			}
 		}

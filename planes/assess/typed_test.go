@@ -44,7 +44,8 @@ func same(x, y float64) bool {
 }
 
 func sameResult(a, b planes.Result) bool {
-	trend := math.IsNaN(a.SlipTrend) && math.IsNaN(b.SlipTrend) || math.Abs(math.Remainder(a.SlipTrend-b.SlipTrend, 360)) < 1e-7
+	const trendTol = 1e-7 // degrees
+	trend := math.IsNaN(a.SlipTrend) && math.IsNaN(b.SlipTrend) || math.Abs(math.Remainder(a.SlipTrend-b.SlipTrend, 360)) < trendTol
 	return a.State == b.State && a.Sense == b.Sense && a.OpensFirst == b.OpensFirst && trend &&
 		same(a.FactorOfSafety, b.FactorOfSafety) && same(a.PressureToSlip, b.PressureToSlip)
 }

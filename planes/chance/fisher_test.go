@@ -43,8 +43,9 @@ func TestFisherAngleDistribution(t *testing.T) {
 	// measured in a frame of the test's own, is uniform: a quarter in each
 	// quadrant, within 5 standard errors.
 	const (
-		n     = 40000
-		kappa = 10.0
+		n       = 40000
+		kappa   = 10.0
+		unitTol = 1e-12 // |v| of a unit vector
 	)
 	f := NewFisher(fisherMean, kappa)
 	r := Stream(200, 0)
@@ -54,7 +55,7 @@ func TestFisherAngleDistribution(t *testing.T) {
 	cosines := make([]float64, n)
 	for i := range cosines {
 		v := f.Draw(r)
-		if !scalar.EqualWithinAbs(r3.Norm(v), 1, 1e-12) {
+		if !scalar.EqualWithinAbs(r3.Norm(v), 1, unitTol) {
 			t.Fatalf("|v| = %v", r3.Norm(v))
 		}
 		cosines[i] = r3.Dot(v, fisherMean)
@@ -91,7 +92,10 @@ func TestFisherAngleDistribution(t *testing.T) {
 func TestFisherConcentrationEstimate(t *testing.T) {
 	// Fisher (1953): K = (N − 1)/(N − R) estimates κ; for large N its
 	// relative spread is about 1/√N (memory), so 2 % is > 5 spreads here.
-	const n = 100000
+	const (
+		n      = 100000
+		relTol = 0.02
+	)
 	for i, kappa := range []float64{5, 20, 100} {
 		t.Run(fmt.Sprintf("κ=%g", kappa), func(t *testing.T) {
 			f := NewFisher(r3.Vec{X: 0, Y: 0, Z: 2}, kappa)
@@ -101,7 +105,7 @@ func TestFisherConcentrationEstimate(t *testing.T) {
 				sum = r3.Add(sum, f.Draw(r))
 			}
 			K := (n - 1) / (n - r3.Norm(sum))
-			if math.Abs(K/kappa-1) > 0.02 {
+			if math.Abs(K/kappa-1) > relTol {
 				t.Errorf("K = %v for κ = %v", K, kappa)
 			}
 		})
@@ -138,8 +142,9 @@ func TestFisherLimits(t *testing.T) {
 	t.Run("κ=Inf is the mean", func(t *testing.T) {
 		f := NewFisher(r3.Scale(3, fisherMean), math.Inf(1))
 		r := Stream(401, 0)
+		const tol = 1e-15 // the unit mean, up to rounding
 		for range 10 {
-			if v := f.Draw(r); r3.Norm(r3.Sub(v, fisherMean)) > 1e-15 {
+			if v := f.Draw(r); r3.Norm(r3.Sub(v, fisherMean)) > tol {
 				t.Fatalf("draw %v, want %v", v, fisherMean)
 			}
 		}

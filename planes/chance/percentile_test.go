@@ -105,7 +105,10 @@ func TestStdErr(t *testing.T) {
 		// n = 400 Bernoulli(0.2) trials. The sample sd of 4000 values is
 		// within 5 % of the truth with overwhelming probability (its relative
 		// sd is ≈ 1/√(2·4000) = 1.1 %).
-		const runs, n, p = 4000, 400, 0.2
+		const (
+			runs, n, p = 4000, 400, 0.2
+			relTol     = 0.05
+		)
 		rng := rand.New(rand.NewPCG(31, 32))
 		s, s2 := 0.0, 0.0
 		for range runs {
@@ -120,7 +123,7 @@ func TestStdErr(t *testing.T) {
 			s2 += ph * ph
 		}
 		sd := math.Sqrt((s2 - s*s/runs) / (runs - 1))
-		if want := StdErr(p, n); math.Abs(sd/want-1) > 0.05 {
+		if want := StdErr(p, n); math.Abs(sd/want-1) > relTol {
 			t.Errorf("simulated sd %v, StdErr %v", sd, want)
 		}
 	})

@@ -22,7 +22,11 @@ func TestSmoothingOfAUniformScatter(t *testing.T) {
 	// σ the sums have mean E/σ and standard deviation 1. Seeded Monte Carlo,
 	// 4000 scatters; the bounds are 5 standard errors.
 	rng := rand.New(rand.NewPCG(41, 42))
-	const n, trials = 200, 4000
+	const (
+		n, trials = 200, 4000
+		bound     = 5    // standard errors
+		limitTol  = 0.01 // E/σ = 3·√(N/(N + 9)) is 3 − 1.4e-5 at N = 10⁶
+	)
 	s := NewSmoothing(n)
 	axis := r3.Vec{Z: 1}
 	var sum, sum2 float64
@@ -37,15 +41,15 @@ func TestSmoothingOfAUniformScatter(t *testing.T) {
 	}
 	mean := sum / trials
 	sd := math.Sqrt(sum2/trials - mean*mean)
-	if want := s.Expected / s.Sigma; math.Abs(mean-want) > 5/math.Sqrt(trials) {
+	if want := s.Expected / s.Sigma; math.Abs(mean-want) > bound/math.Sqrt(trials) {
 		t.Errorf("mean density %v σ, want %v", mean, want)
 	}
-	if math.Abs(sd-1) > 5/math.Sqrt(2*trials) {
+	if math.Abs(sd-1) > bound/math.Sqrt(2*trials) {
 		t.Errorf("spread %v σ, want 1", sd)
 	}
 	// For many readings a uniform scatter reads 3σ, as Kamb's counting
 	// (K = 2(1 + N/9), derived: E/σ → (N/K)/√(N/(2K)) = √(2N/K) → 3).
-	if big := NewSmoothing(1e6); !scalar.EqualWithinAbs(big.Expected/big.Sigma, 3, 0.01) {
+	if big := NewSmoothing(1e6); !scalar.EqualWithinAbs(big.Expected/big.Sigma, 3, limitTol) {
 		t.Errorf("1e6 readings: uniform reads %v σ", big.Expected/big.Sigma)
 	}
 }
@@ -54,6 +58,7 @@ func TestSmoothCounterIsTheSum(t *testing.T) {
 	// The cell search leaves out only weights below 1e-12: its sums match
 	// the plain sum over every reading (a different route to the same
 	// number), weighted and not, for small and large sets.
+	const sumTol = 1e-9 // relative, or this times n/σ absolute
 	rng := rand.New(rand.NewPCG(43, 44))
 	for _, n := range []int{20, 500, 20000} {
 		ns := make([]r3.Vec, n)
@@ -73,7 +78,7 @@ func TestSmoothCounterIsTheSum(t *testing.T) {
 			for range 50 {
 				a := uniformAxis(rng)
 				want := s.Density(a, ns, w)
-				if got := c.Density(a); !scalar.EqualWithinAbsOrRel(got, want, 1e-9*float64(n)/s.Sigma, 1e-9) {
+				if got := c.Density(a); !scalar.EqualWithinAbsOrRel(got, want, sumTol*float64(n)/s.Sigma, sumTol) {
 					t.Fatalf("n %d: counter %v, sum %v", n, got, want)
 				}
 			}

@@ -42,7 +42,8 @@ func TestParseDefaults(t *testing.T) {
 	}
 	// Density 2700 kg/m³ → 0.026487 MPa/m (ρ·g with g = 9.81, common practice).
 	st := s.Model.At(100)
-	if !scalar.EqualWithinAbs(st.Total.DD, 2.6487, 1e-9) {
+	const tol = 1e-9 // MPa
+	if !scalar.EqualWithinAbs(st.Total.DD, 2.6487, tol) {
 		t.Errorf("Sv(100 m) = %v, want 2.6487", st.Total.DD)
 	}
 	if got := s.Summary(); !strings.Contains(got, "SHmax 1.3·Sv @ 065°") || !strings.Contains(got, "μ = 0.6 (default)") {
@@ -63,7 +64,8 @@ water: {dry: true}
 	st := s.Model.At(1000)
 	// Sheorey (1994) as given by Hoek, derived: k(50 GPa, 1000 m) = 0.95.
 	want := 0.95 * 27
-	if v := st.Principal.Values; !scalar.EqualWithinAbs(v[2], want, 1e-9) || !scalar.EqualWithinAbs(v[1], want, 1e-9) {
+	const tol = 1e-9 // MPa
+	if v := st.Principal.Values; !scalar.EqualWithinAbs(v[2], want, tol) || !scalar.EqualWithinAbs(v[1], want, tol) {
 		t.Errorf("horizontal stresses %v, want both %v", v, want)
 	}
 }
@@ -119,17 +121,23 @@ sets: {seeds: ["70/135", "20/250"], max_angle: 25, line: "100/70", max_weight: 5
 	if s.ReadingsFile != "d/r.csv" || len(c.Seeds) != 2 || c.Seeds[1].DipDirection() != 250 || c.MaxAngle != 25 || c.Line == nil || c.Line.Plunge != 70 || c.MaxWeight != 5 {
 		t.Errorf("sets %+v, readings %q", c, s.ReadingsFile)
 	}
-	for _, bad := range []struct{ sets, want string }{
-		{`{count: 3, seeds: ["70/135"]}`, "1 seeds for count: 3"},
-		{`{count: 2.5}`, "want a whole number of sets"},
-		{`{line: "east"}`, "want TREND/PLUNGE"},
-		{`{seeds: ["95/10"]}`, "dip 95 is outside"},
-		{`{max_weight: 0.5}`, "0.5 is outside the allowed range [1, 1000]"},
+	// The sets block's mistakes, compared whole. The first four carry no
+	// finer kind than ErrInvalid, though ErrConflict, ErrType and ErrRange
+	// would fit them.
+	for _, bad := range []struct {
+		sets string
+		want Error
+	}{
+		{`{count: 3, seeds: ["70/135"]}`, Error{File: "s.yaml", Line: 7, Column: 25, Key: "sets.seeds", Err: ErrInvalid, Msg: "1 seeds for count: 3: give one seed per set, or leave count out"}},
+		{`{count: 2.5}`, Error{File: "s.yaml", Line: 7, Column: 15, Key: "sets.count", Err: ErrInvalid, Msg: "2.5: want a whole number of sets"}},
+		{`{line: "east"}`, Error{File: "s.yaml", Line: 7, Column: 14, Key: "sets.line", Err: ErrInvalid, Msg: `"east": want TREND/PLUNGE in degrees, e.g. 120/10`}},
+		{`{seeds: ["95/10"]}`, Error{File: "s.yaml", Line: 7, Column: 16, Key: "sets.seeds[0]", Err: ErrInvalid, Msg: "dip 95 is outside [0, 90]"}},
+		{`{max_weight: 0.5}`, Error{File: "s.yaml", Line: 7, Column: 20, Key: "sets.max_weight", Err: ErrRange, Msg: "0.5 is outside the allowed range [1, 1000]"}},
 	} {
-		_, err := Parse([]byte(minimal+"readings_file: r.csv\nsets: "+bad.sets+"\n"), "s.yaml")
-		if err == nil || !strings.Contains(err.Error(), bad.want) {
-			t.Errorf("sets: %s: %v, want %q", bad.sets, err, bad.want)
-		}
+		t.Run(bad.sets, func(t *testing.T) {
+			_, err := Parse([]byte(minimal+"readings_file: r.csv\nsets: "+bad.sets+"\n"), "s.yaml")
+			sameError(t, err, bad.want)
+		})
 	}
 }
 
@@ -147,7 +155,6 @@ func TestCoverFile(t *testing.T) {
 	if c, ok := s.Tunnel.CoverAt(25); !ok || c != 15 {
 		t.Errorf("cover at 25 m = %v, %v; want 15", c, ok)
 	}
-	if _, err := ParseFS(fsys, "bad.yaml"); err == nil || !strings.Contains(err.Error(), "badcover.csv:3: cover: \"-3\": want a decimal number in [0, 20000] m") {
-		t.Errorf("bad cover file: %v", err)
-	}
+	_, err = ParseFS(fsys, "bad.yaml")
+	sameError(t, err, Error{File: "badcover.csv", Line: 3, Key: "cover", Err: ErrRange, Msg: `"-3": want a decimal number in [0, 20000] m`})
 }

@@ -15,7 +15,10 @@ import (
 func phiOf(mu float64) float64 { return math.Atan(mu) * geom.Deg }
 
 func TestOwnFrictionInTheKinematicTests(t *testing.T) {
-	const tol = 1e-9
+	const (
+		tol     = 1e-9
+		readTol = 1e-4 // degrees: φ = atan 0.45 given to four decimals
+	)
 	// A clay-gouge plane 30/180 of μ 0.45 (φ 24.2°) under a 60/180 face,
 	// the slope's φ 35°: Hoek & Bray's (1981) planar condition ψp > φ holds
 	// with the plane's own φ, and the dry cohesionless factor of safety is
@@ -25,7 +28,7 @@ func TestOwnFrictionInTheKinematicTests(t *testing.T) {
 	gouge := Candidate{Name: "gouge", Orientation: planes.MustNew(30, 180), Phi: phiOf(0.45)}
 	sc := Screen(sl, []Candidate{gouge})
 	c := sc.Cases[0]
-	if !c.Feasible || !scalar.EqualWithinAbs(c.Phi, 24.2277, 1e-4) || c.FS == nil || !scalar.EqualWithinAbs(c.FS[0], 0.45/math.Tan(30*geom.Rad), tol) {
+	if !c.Feasible || !scalar.EqualWithinAbs(c.Phi, 24.2277, readTol) || c.FS == nil || !scalar.EqualWithinAbs(c.FS[0], 0.45/math.Tan(30*geom.Rad), tol) {
 		t.Errorf("gouge plane: %+v", c)
 	}
 	// A wedge 45/130 + 45/230 of μ 0.45 on the same face: its line 180/32.7

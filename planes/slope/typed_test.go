@@ -43,9 +43,13 @@ func TestPlanesWithoutADipDirection(t *testing.T) {
 	// it is typed (typed 90/090, its dip direction would lie between the
 	// line's trend and the face's, and its own 30° would be reported).
 	b := planes.MustNew(40, 340)
+	const (
+		angleTol = 1e-9 // degrees
+		readTol  = 1e-4 // degrees: 38.2556 is given to four decimals
+	)
 	for _, dd := range []float64{90, 270} {
 		l, _, k := WedgeSliding(planes.MustNew(90, dd), b, planes.MustNew(60, 120), 30, 20)
-		if k.Phi != 20 || k.Fails != Daylight || math.Abs(l.Trend) > 1e-9 || math.Abs(l.Plunge-38.2556) > 1e-4 {
+		if k.Phi != 20 || k.Fails != Daylight || math.Abs(l.Trend) > angleTol || math.Abs(l.Plunge-38.2556) > readTol {
 			t.Errorf("90/%03.0f + 40/340: line %v, fails %b, φ %v; want 000/38.26, daylight alone, 20", dd, l, k.Fails, k.Phi)
 		}
 	}

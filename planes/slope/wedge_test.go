@@ -152,7 +152,11 @@ func TestWedgeModeFromMechanics(t *testing.T) {
 }
 
 func TestWedgeGeometry(t *testing.T) {
-	const tol = 1e-9
+	const (
+		tol     = 1e-9
+		onPlane = 1e-6 // m: a corner this close to a plane lies on it
+		cutTol  = 1e-7 // m, m², m³: areas and volumes by a second route
+	)
 	sl := wedgeSlope()
 	sl.Top = planes.MustNew(8, 200)
 	for _, p := range randomWedges(t, sl, 13, 100, NoMode) {
@@ -172,9 +176,9 @@ func TestWedgeGeometry(t *testing.T) {
 			switch {
 			case r3.Norm(q) < tol:
 				o = q
-			case math.Abs(r3.Dot(q, w.NormalB)) > 1e-6:
+			case math.Abs(r3.Dot(q, w.NormalB)) > onPlane:
 				pa = q
-			case math.Abs(r3.Dot(q, w.NormalA)) > 1e-6:
+			case math.Abs(r3.Dot(q, w.NormalA)) > onPlane:
 				pb = q
 			default:
 				pc = q
@@ -189,11 +193,11 @@ func TestWedgeGeometry(t *testing.T) {
 		nF, nT := sl.Face.Normal(), sl.Top.Normal()
 		crest := r3.Scale(sl.Height/math.Sin(sl.Face.Dip()*geom.Rad), sl.Face.UpDip())
 		for _, q := range []r3.Vec{pa, pb} {
-			if math.Abs(r3.Dot(nF, q)) > 1e-9 || math.Abs(r3.Dot(nT, r3.Sub(q, crest))) > 1e-9 {
+			if math.Abs(r3.Dot(nF, q)) > tol || math.Abs(r3.Dot(nT, r3.Sub(q, crest))) > tol {
 				t.Errorf("crest corner %v off the face or the top", q)
 			}
 		}
-		if !scalar.EqualWithinAbs(w.TraceA, r3.Norm(pa), tol) || !scalar.EqualWithinAbs(w.AreaA, r3.Norm(r3.Cross(pa, pc))/2, 1e-7) {
+		if !scalar.EqualWithinAbs(w.TraceA, r3.Norm(pa), tol) || !scalar.EqualWithinAbs(w.AreaA, r3.Norm(r3.Cross(pa, pc))/2, cutTol) {
 			t.Errorf("trace %v area %v", w.TraceA, w.AreaA)
 		}
 		// A crack 2 m behind the crest cuts off the tetrahedron beyond it:
@@ -215,16 +219,16 @@ func TestWedgeGeometry(t *testing.T) {
 		}
 		ka, kb, ko := at(pa), at(pb), at(o)
 		cut := math.Abs(r3.Dot(r3.Sub(ka, pc), r3.Cross(r3.Sub(kb, pc), r3.Sub(ko, pc)))) / 6
-		if !scalar.EqualWithinAbsOrRel(wc.Volume, w.Volume-cut, 1e-7, 1e-7) {
+		if !scalar.EqualWithinAbsOrRel(wc.Volume, w.Volume-cut, cutTol, cutTol) {
 			t.Errorf("cracked volume %v, want %v − %v", wc.Volume, w.Volume, cut)
 		}
-		if !scalar.EqualWithinAbsOrRel(wc.CrackArea, r3.Norm(r3.Cross(r3.Sub(ka, ko), r3.Sub(kb, ko)))/2, 1e-7, 1e-7) {
+		if !scalar.EqualWithinAbsOrRel(wc.CrackArea, r3.Norm(r3.Cross(r3.Sub(ka, ko), r3.Sub(kb, ko)))/2, cutTol, cutTol) {
 			t.Errorf("crack area %v", wc.CrackArea)
 		}
 		// The crack's depth at the line: from its foot ko straight up to the
 		// top, nT·(crest − ko)/(−nT.z) with nT the top's upward normal.
 		up := r3.Scale(-1, nT)
-		if want := r3.Dot(up, r3.Sub(crest, ko)) / -up.Z; !scalar.EqualWithinAbsOrRel(wc.CrackDepth, want, 1e-7, 1e-7) {
+		if want := r3.Dot(up, r3.Sub(crest, ko)) / -up.Z; !scalar.EqualWithinAbsOrRel(wc.CrackDepth, want, cutTol, cutTol) {
 			t.Errorf("crack depth %v, want %v", wc.CrackDepth, want)
 		}
 	}

@@ -67,7 +67,11 @@ func TestWedgeWaterShortForm(t *testing.T) {
 }
 
 func TestWedgeCrackWater(t *testing.T) {
-	const tol = 1e-9
+	const (
+		tol      = 1e-9
+		onPlane  = 1e-7 // m: a corner this close to a plane lies on it
+		forceTol = 1e-7 // MN, absolute or relative
+	)
 	// Flat top, a crack 3 m behind the crest: the crack face is a triangle
 	// with its foot k on the line of intersection dK below the top and its
 	// other corners on the top. Hydrostatic pressure, linear over it: full,
@@ -102,21 +106,21 @@ func TestWedgeCrackWater(t *testing.T) {
 			}
 			for _, q := range f.pts {
 				switch {
-				case math.Abs(r3.Dot(q, w.NormalA)) < 1e-7 && math.Abs(r3.Dot(q, w.NormalB)) < 1e-7:
+				case math.Abs(r3.Dot(q, w.NormalA)) < onPlane && math.Abs(r3.Dot(q, w.NormalB)) < onPlane:
 					k = q
-				case math.Abs(r3.Dot(q, w.NormalA)) < 1e-7:
+				case math.Abs(r3.Dot(q, w.NormalA)) < onPlane:
 					aK = q
 				}
 			}
 		}
 		uA, _, _ := w.Water(dK)
-		if want := insitu.Hydrostatic * dK * r3.Norm(r3.Cross(aK, k)) / 6; !scalar.EqualWithinAbsOrRel(uA, want, 1e-7, 1e-7) {
+		if want := insitu.Hydrostatic * dK * r3.Norm(r3.Cross(aK, k)) / 6; !scalar.EqualWithinAbsOrRel(uA, want, forceTol, forceTol) {
 			t.Errorf("full crack: UA %v, want %v", uA, want)
 		}
 		// A crack given by its depth at the line is that deep there.
 		bd := sl
 		bd.CrackByDepth, bd.Crack = true, dK/2
-		if wd, err := NewWedgeBlock(bd, p[0], p[1]); err != nil || !scalar.EqualWithinAbs(wd.CrackDepth, dK/2, 1e-9) {
+		if wd, err := NewWedgeBlock(bd, p[0], p[1]); err != nil || !scalar.EqualWithinAbs(wd.CrackDepth, dK/2, tol) {
 			t.Errorf("crack by depth %v: %v, %v", dK/2, wd.CrackDepth, err)
 		}
 	}

@@ -50,6 +50,7 @@ func TestWallTensorResolved(t *testing.T) {
 	// crown σθ = 3·5 − 10 = 5 along east, σz = 8 − 2·0.25·5 = 5.5; sidewall
 	// σθ = 15 + 2·5 = 25 vertical, σz = 8 + 2·0.25·5 = 10.5; σr = 0. On a
 	// plane dipping 45° east, the 2-D Mohr circle gives σn = τ = σθ/2.
+	const tol = 1e-12 // MPa
 	up, right, along := opening.TunnelFrame(geom.Line{Trend: 0})
 	far := insitu.Tensor{NN: 10, EE: 5, DD: 8}
 	c := &planes.Coulomb{Mu: 0.6}
@@ -62,15 +63,15 @@ func TestWallTensorResolved(t *testing.T) {
 	} {
 		ws := opening.Wall(far, w.theta, 0.25)
 		st := insitu.NewState(ws.WallTensor(up, right, along, w.theta), 100, 0, 1)
-		if r := planes.Resolve(st, w.flat, c); !scalar.EqualWithinAbs(r.Normal, w.sigma, 1e-12) || r.Shear > 1e-12 {
+		if r := planes.Resolve(st, w.flat, c); !scalar.EqualWithinAbs(r.Normal, w.sigma, tol) || r.Shear > tol {
 			t.Errorf("θ %v: plane normal to the tangent σn %v τ %v, want %v and 0", w.theta, r.Normal, r.Shear, w.sigma)
 		}
 		r := planes.Resolve(st, planes.MustNew(45, 90), c)
-		if !scalar.EqualWithinAbs(r.Normal, w.sigma/2, 1e-12) || !scalar.EqualWithinAbs(r.Shear, w.sigma/2, 1e-12) {
+		if !scalar.EqualWithinAbs(r.Normal, w.sigma/2, tol) || !scalar.EqualWithinAbs(r.Shear, w.sigma/2, tol) {
 			t.Errorf("θ %v: 45/090 σn %v τ %v, want %v each", w.theta, r.Normal, r.Shear, w.sigma/2)
 		}
 	}
-	if ws := opening.Wall(far, 0, 0.25); !scalar.EqualWithinAbs(ws.Z, 5.5, 1e-12) {
+	if ws := opening.Wall(far, 0, 0.25); !scalar.EqualWithinAbs(ws.Z, 5.5, tol) {
 		t.Errorf("crown σz = %v, want 5.5", ws.Z)
 	}
 }
