@@ -60,8 +60,8 @@ is shown on standard error for long runs when it is a terminal.
 		},
 	}
 	c.Flags().StringVar(&o.out, "out", "", "output folder (created if missing)")
-	c.Flags().IntVar(&o.realisations, "realisations", 0, "number of realisations (default: the site's, else 10000)")
-	c.Flags().Uint64Var(&o.seed, "seed", 1, "seed of the random streams (default: the site's, else 1)")
+	c.Flags().IntVar(&o.realisations, "realisations", 0, "number of realisations; 0 for the site's, else 10000")
+	uintVar(c.Flags(), &o.seed, "seed", 1, "seed of the random streams, a whole number ≥ 0; when not given, the site's, else 1")
 	return c
 }
 

@@ -94,3 +94,30 @@ func inRange(name string, v, lo, hi float64, unit string) error {
 	}
 	return usagef("--%s %g: want %g to %g%s", name, v, lo, hi, unit)
 }
+
+// uintFlag is a whole-number flag ≥ 0 read as decimal digits only.
+type uintFlag struct{ v *uint64 }
+
+func (f *uintFlag) String() string {
+	if f.v == nil {
+		return ""
+	}
+	return strconv.FormatUint(*f.v, 10)
+}
+
+func (f *uintFlag) Set(s string) error {
+	v, err := strconv.ParseUint(strings.TrimSpace(s), 10, 64)
+	if err != nil {
+		return fmt.Errorf("want a whole number ≥ 0 such as 7")
+	}
+	*f.v = v
+	return nil
+}
+
+func (f *uintFlag) Type() string { return "whole number" }
+
+// uintVar defines a whole-number flag ≥ 0 with a default value.
+func uintVar(fs *pflag.FlagSet, p *uint64, name string, value uint64, usage string) {
+	*p = value
+	fs.Var(&uintFlag{v: p}, name, usage)
+}

@@ -88,12 +88,17 @@ func runSlope(o slopeOptions, stdout io.Writer) error {
 // printSlope prints the feasible cases in a few lines, and the readings
 // against the tests.
 func printSlope(b *strings.Builder, sc *slope.Screening, counts []slope.Count) {
-	for _, l := range words.SlopeLines(sc) {
-		b.WriteString(l + "\n")
+	for _, l := range append(words.SlopeLines(sc), words.ReadingLines(counts)...) {
+		b.WriteString(wrapIndented(l, 100) + "\n")
 	}
-	for _, l := range words.ReadingLines(counts) {
-		b.WriteString(l + "\n")
-	}
+}
+
+// wrapIndented wraps l at width, its continuation lines indented two
+// spaces more than l is.
+func wrapIndented(l string, width int) string {
+	lead := len(l) - len(strings.TrimLeft(l, " "))
+	pad := strings.Repeat(" ", lead)
+	return pad + strings.ReplaceAll(words.Wrap(l, width-lead), "\n", "\n"+pad+"  ")
 }
 
 // slopeTables are slope.csv and, with readings, slope-readings.csv.

@@ -210,6 +210,9 @@ func (r stressRow) text(b *strings.Builder) {
 		ratio = "∞ (σ3' ≤ 0)"
 	}
 	verdict := "within the limit"
+	if math.IsNaN(float64(r.Ratio)) {
+		verdict = "the check does not apply"
+	}
 	if r.Exceeds {
 		verdict = "EXCEEDS the limit: such a state would already have slipped on optimally oriented planes; check the stress estimate"
 	}

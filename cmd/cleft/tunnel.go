@@ -80,7 +80,13 @@ func runTunnel(o tunnelOptions, stdout io.Writer) error {
 		section, wall := sectionStation(sc), sc.Worst()
 		if !math.IsNaN(o.station) {
 			if section = sc.StationAt(o.station); section < 0 {
-				return usagef("--station %g: no station at that chainage (stations every %g m from %g)", o.station, sc.Tunnel.Spacing, sc.Stations[0].Chainage)
+				near := sc.Stations[0].Chainage
+				for _, st := range sc.Stations {
+					if math.Abs(st.Chainage-o.station) < math.Abs(near-o.station) {
+						near = st.Chainage
+					}
+				}
+				return usagef("--station %g: no station at that chainage (stations every %g m from %g; the nearest is %g)", o.station, sc.Tunnel.Spacing, sc.Stations[0].Chainage, near)
 			}
 			wall = section
 		}

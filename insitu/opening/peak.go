@@ -90,13 +90,19 @@ func MaxWallPrincipal(far insitu.Tensor, nu, support float64) Peak {
 }
 
 // halfTurn reduces an angle in degrees to [0, 180), with no negative zero.
+// An angle within halfTurnTol of 180 is the same place as 0 and is given as
+// 0, so that it is never written as 180 once rounded.
 func halfTurn(th float64) float64 {
 	th = math.Mod(th, 180)
 	if th < 0 {
 		th += 180
 	}
-	if th >= 180 || th == 0 {
+	if th >= 180-halfTurnTol || th == 0 {
 		th = 0 // a tiny negative th rounds up to 180 above; −0 becomes +0
 	}
 	return th
 }
+
+// halfTurnTol is below the resolution of the tables' 8 significant digits
+// at 180° (1e-5°).
+const halfTurnTol = 1e-5

@@ -146,3 +146,16 @@ func TestMaxWallPrincipal(t *testing.T) {
 		}
 	})
 }
+
+func TestHalfTurnNeverGivesHalfATurn(t *testing.T) {
+	// Angles round the wall are in [0, 180): one a hair below 180 (which a
+	// table would round to "180") is the same place as 0 (common practice).
+	for _, th := range []float64{180, 179.999999999, -1e-12, 360, 539.9999999999} {
+		if got := halfTurn(th); got != 0 {
+			t.Errorf("halfTurn(%v) = %v, want 0", th, got)
+		}
+	}
+	if got := halfTurn(179.9); got != 179.9 {
+		t.Errorf("halfTurn(179.9) = %v", got)
+	}
+}

@@ -58,6 +58,9 @@ func (d Dist) Truncate(min, max float64) (Dist, error) {
 		}
 		t.fa, t.fb = f(min), f(max)
 		if !(t.fb > t.fa) {
+			if d.kind == Uniform {
+				return d, fmt.Errorf("%w: %v(%g, %g) on [%g, %g]", ErrEmpty, d.kind, d.p[0], d.p[1], min, max)
+			}
 			return d, fmt.Errorf("%w: %v(%g, %g, %g) on [%g, %g]", ErrEmpty, d.kind, d.p[0], d.p[1], d.p[2], min, max)
 		}
 	}

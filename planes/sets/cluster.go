@@ -57,7 +57,7 @@ func Cluster(normals []r3.Vec, o ClusterOptions) Clustering {
 		k = len(o.Seeds)
 	}
 	if k < 1 || k > len(normals) {
-		panic("planes: Cluster needs 1 ≤ K ≤ number of readings")
+		panic("sets: Cluster needs 1 ≤ K ≤ number of readings")
 	}
 	unit := make([]r3.Vec, len(normals))
 	for i, n := range normals {

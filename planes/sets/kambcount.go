@@ -38,10 +38,10 @@ type KambCounter struct {
 // none; else one per reading). It panics if the lengths differ.
 func NewKambCounter(k Kamb, normals []r3.Vec, weights []float64) *KambCounter {
 	if weights != nil && len(weights) != len(normals) {
-		panic("planes: NewKambCounter with different numbers of normals and weights")
+		panic("sets: NewKambCounter with different numbers of normals and weights")
 	}
 	if len(normals) > math.MaxInt32 {
-		panic("planes: NewKambCounter with more than 2³¹ − 1 readings")
+		panic("sets: NewKambCounter with more than 2³¹ − 1 readings")
 	}
 	// |a − n|² = 2 − 2 a·n for unit a and n, so a·n ≥ cos θ puts n within
 	// the chord √(2 − 2 cos θ) of a; the margin covers the rounding of the

@@ -27,7 +27,7 @@ type Eigen struct {
 // weight is 0.
 func OrientationTensor(normals []r3.Vec, weights []float64) Eigen {
 	if weights != nil && len(weights) != len(normals) {
-		panic("planes: OrientationTensor with different numbers of normals and weights")
+		panic("sets: OrientationTensor with different numbers of normals and weights")
 	}
 	var s tensorSum
 	for i, n := range normals {
@@ -73,7 +73,7 @@ func (s *tensorSum) eigen() Eigen {
 	}
 	v, a, ok := geom.EigenDescending(geom.Sym3{XX: t[0], YY: t[1], ZZ: t[2], XY: t[3], XZ: t[4], YZ: t[5]})
 	if !ok {
-		panic("planes: eigen decomposition of an orientation tensor failed")
+		panic("sets: eigen decomposition of an orientation tensor failed")
 	}
 	out := Eigen{Axes: a}
 	for i := range 3 {

@@ -23,7 +23,7 @@ func (s *Site) readSets(v node) error {
 			return err
 		}
 		if n != math.Trunc(n) {
-			return cv.errf("%v: want a whole number of sets", n)
+			return cv.errf("%v: want a whole number of sets", n).is(ErrRange)
 		}
 		c.Count = int(n)
 	}
@@ -42,12 +42,12 @@ func (s *Site) readSets(v node) error {
 			}
 			o, err := ParseOrientation(t)
 			if err != nil {
-				return it.errf("%v", err)
+				return it.errf("%v", err).is(ErrRange)
 			}
 			c.Seeds = append(c.Seeds, o)
 		}
 		if c.Count != 0 && c.Count != len(c.Seeds) {
-			return sv.errf("%d seeds for count: %d: give one seed per set, or leave count out", len(c.Seeds), c.Count)
+			return sv.errf("%d seeds for count: %d: give one seed per set, or leave count out", len(c.Seeds), c.Count).is(ErrConflict)
 		}
 	}
 	if c.MaxAngle, _, err = m.optNumber("max_angle", interval{lo: 0, hi: 90, openLo: true, unit: "°"}, 0); err != nil {
@@ -60,7 +60,7 @@ func (s *Site) readSets(v node) error {
 		}
 		l, err := ParseLine(t)
 		if err != nil {
-			return lv.errf("%v", err)
+			return lv.errf("%v", err).is(ErrRange)
 		}
 		c.Line = &l
 	}

@@ -268,7 +268,7 @@ func (s *Site) read(root node) error {
 	}
 	if sv, ok := f.get("sets"); ok {
 		if s.ReadingsFile == "" {
-			return sv.errf("sets: goes with readings_file: (the field readings to group)").is(ErrConflict)
+			return sv.errf("goes with readings_file: (the field readings to group)").is(ErrConflict)
 		}
 		if err := s.readSets(sv); err != nil {
 			return err

@@ -128,10 +128,10 @@ sets: {seeds: ["70/135", "20/250"], max_angle: 25, line: "100/70", max_weight: 5
 		sets string
 		want Error
 	}{
-		{`{count: 3, seeds: ["70/135"]}`, Error{File: "s.yaml", Line: 7, Column: 25, Key: "sets.seeds", Err: ErrInvalid, Msg: "1 seeds for count: 3: give one seed per set, or leave count out"}},
-		{`{count: 2.5}`, Error{File: "s.yaml", Line: 7, Column: 15, Key: "sets.count", Err: ErrInvalid, Msg: "2.5: want a whole number of sets"}},
-		{`{line: "east"}`, Error{File: "s.yaml", Line: 7, Column: 14, Key: "sets.line", Err: ErrInvalid, Msg: `"east": want TREND/PLUNGE in degrees, e.g. 120/10`}},
-		{`{seeds: ["95/10"]}`, Error{File: "s.yaml", Line: 7, Column: 16, Key: "sets.seeds[0]", Err: ErrInvalid, Msg: "dip 95 is outside [0, 90]"}},
+		{`{count: 3, seeds: ["70/135"]}`, Error{File: "s.yaml", Line: 7, Column: 25, Key: "sets.seeds", Err: ErrConflict, Msg: "1 seeds for count: 3: give one seed per set, or leave count out"}},
+		{`{count: 2.5}`, Error{File: "s.yaml", Line: 7, Column: 15, Key: "sets.count", Err: ErrRange, Msg: "2.5: want a whole number of sets"}},
+		{`{line: "east"}`, Error{File: "s.yaml", Line: 7, Column: 14, Key: "sets.line", Err: ErrRange, Msg: `"east": want TREND/PLUNGE in degrees, e.g. 120/10`}},
+		{`{seeds: ["95/10"]}`, Error{File: "s.yaml", Line: 7, Column: 16, Key: "sets.seeds[0]", Err: ErrRange, Msg: "dip 95 is outside [0, 90]"}},
 		{`{max_weight: 0.5}`, Error{File: "s.yaml", Line: 7, Column: 20, Key: "sets.max_weight", Err: ErrRange, Msg: "0.5 is outside the allowed range [1, 1000]"}},
 	} {
 		t.Run(bad.sets, func(t *testing.T) {

@@ -113,7 +113,7 @@ func NewPlaneReader(r io.Reader, file string, d planeDefaults) (*PlaneReader, er
 	case !pr.present[colStrike] && !pr.present[colDipDirection]:
 		return nil, need(colDipDirection, " (or strike, right-hand rule)")
 	case !pr.present[colDepth] && !d.hasDepth && !d.readings:
-		return nil, need(colDepth, " and the site file gives no depth:")
+		return nil, need(colDepth, " and the site file gives no depth")
 	}
 	return pr, nil
 }

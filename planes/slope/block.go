@@ -45,11 +45,11 @@ func NewPlanarBlock(h, faceDip, topDip, planeDip, crack float64, byDepth bool, g
 	tp, ts, tf := tand(planeDip), tand(topDip), tand(faceDip)
 	switch {
 	case !(h > 0):
-		return b, fmt.Errorf("slope height %v m: want > 0", h)
+		return b, fmt.Errorf("slope height %.3g m: want > 0", h)
 	case !(planeDip > 0 && planeDip < faceDip):
-		return b, fmt.Errorf("plane dip %v° must be between 0 and the face dip %v° for planar sliding", planeDip, faceDip)
+		return b, fmt.Errorf("plane dip %.1f° must be between 0 and the face dip %.1f° for planar sliding", planeDip, faceDip)
 	case !(topDip > -90 && topDip < planeDip):
-		return b, fmt.Errorf("upper surface dip %v° must be less than the plane dip %v° for the plane to outcrop behind the crest", topDip, planeDip)
+		return b, fmt.Errorf("upper surface dip %.1f° must be less than the plane dip %.1f° for the plane to outcrop behind the crest", topDip, planeDip)
 	}
 	xc := h / tf // crest
 	top := func(x float64) float64 { return h + (x-xc)*ts }
@@ -59,7 +59,7 @@ func NewPlanarBlock(h, faceDip, topDip, planeDip, crack float64, byDepth bool, g
 		if crack > 0 {
 			xk = (h - crack - xc*ts) / (tp - ts)
 			if xk < xc {
-				return b, fmt.Errorf("a tension crack %v m deep would meet the plane in front of the crest: the crack must be in the upper surface (at most %.2f m deep here)", crack, h-xc*tp)
+				return b, fmt.Errorf("a tension crack %.3g m deep would meet the plane in front of the crest: the crack must be in the upper surface (at most %.2f m deep here)", crack, h-xc*tp)
 			}
 		}
 	} else {

@@ -72,8 +72,12 @@ func ChanceOverview(targets []study.Target, runs []study.CaseRun, out *study.Out
 				robust++
 			}
 		}
-		lines = append(lines, fmt.Sprintf("The site was run in %d cases, the base and %s (%s): %d of %d planes and set means keep their state in every case, %d change it.",
-			len(runs), Plural(len(runs)-1, "bracketing case", "bracketing cases"), strings.Join(names, ", "), robust, n, n-robust))
+		change := "change it"
+		if n-robust == 1 {
+			change = "changes it"
+		}
+		lines = append(lines, fmt.Sprintf("The site was run in %d cases, the base and %s (%s): %d of %d planes and set means keep their state in every case, %d %s.",
+			len(runs), Plural(len(runs)-1, "bracketing case", "bracketing cases"), strings.Join(names, ", "), robust, n, n-robust, change))
 	}
 	if out != nil {
 		some, half := 0, 0

@@ -167,8 +167,13 @@ func fsList(sl slope.Slope, c slope.Case) string {
 			wc = "with " + strings.Replace(wc, "table", "the table", 1)
 		}
 		s := fmt.Sprintf("%s %s", FS(c.FS[i]), wc)
-		if w.Kind != slope.WaterHead || c.Heads[i] != w.Depth {
-			s += fmt.Sprintf(" (%.1f m)", c.Heads[i])
+		switch {
+		case w.Kind == slope.WaterTable && c.Heads[i] == 0:
+			s += " (below the block: no water in it)"
+		case w.Kind == slope.WaterHead && c.Heads[i] < w.Depth:
+			s += fmt.Sprintf(" (%.1f m, the most the block holds)", c.Heads[i])
+		case w.Kind != slope.WaterHead:
+			s += fmt.Sprintf(" (%.1f m of water)", c.Heads[i])
 		}
 		if c.Modes != nil && c.Modes[i] != c.Mode {
 			s += " on " + c.Modes[i].String()
