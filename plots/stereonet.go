@@ -19,6 +19,9 @@ type Pole struct {
 	Orientation planes.Orientation
 	Result      planes.Result
 	Trace       bool
+	// Named asks for the great circle to be named even when the plane is
+	// stable (a plane the reader chose by name).
+	Named bool
 }
 
 // Stereonet is the tendency stereonet: the measure for every orientation at

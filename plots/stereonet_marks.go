@@ -150,7 +150,7 @@ func (s *Stereonet) name(lab *labeller, n net, l look, g float64) {
 		s.nameTrace(lab, n, traceSty, p)
 	}
 	for i := range s.Poles {
-		if p := &s.Poles[i]; p.Trace && p.Result.State != planes.Stable {
+		if p := &s.Poles[i]; p.Trace && (p.Result.State != planes.Stable || p.Named) {
 			s.nameTrace(lab, n, traceSty, *p)
 		}
 	}

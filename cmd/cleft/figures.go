@@ -145,9 +145,10 @@ func stereonet(a *assess.Assessment, o figureOptions, w, h float64) *plots.Stere
 	}
 	st.Field = plots.NewField(st.State, st.Criterion, st.Measure, st.Proj, plots.FieldSize(cm(w, 0), cm(h, 0)))
 	idx, trace := drawn(a, o.traces)
+	byName := o.traces != "" && o.traces != "unstable" && o.traces != "all" && o.traces != "none"
 	for _, i := range idx {
 		p := &a.Planes[i]
-		st.Poles = append(st.Poles, plots.Pole{Name: p.Name, Orientation: p.Orientation, Result: a.Results[i], Trace: trace[i]})
+		st.Poles = append(st.Poles, plots.Pole{Name: p.Name, Orientation: p.Orientation, Result: a.Results[i], Trace: trace[i], Named: byName && trace[i]})
 	}
 	if n := hiddenNote(a, idx, trace, o.traces); n != "" {
 		st.Note = strings.ToUpper(n[:1]) + n[1:]
