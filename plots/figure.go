@@ -6,6 +6,7 @@ import (
 	"io"
 	"path/filepath"
 	"strings"
+	"sync"
 
 	xfont "golang.org/x/image/font"
 	"gonum.org/v1/plot"
@@ -90,10 +91,31 @@ const (
 // textWidth returns the width the layout keeps for txt in sty: its advance
 // width in the figure font, widened by the slack for fallback fonts.
 func textWidth(sty draw.TextStyle, txt string) vg.Length {
-	if sty.Font.Weight >= xfont.WeightBold {
-		return sty.Width(txt) * boldFontSlack
+	k := widthKey{sty.Font.Typeface, sty.Font.Variant, sty.Font.Style, sty.Font.Weight, sty.Font.Size, txt}
+	if w, ok := widths.Load(k); ok {
+		return w.(vg.Length)
 	}
-	return sty.Width(txt) * fontSlack
+	w := sty.Width(txt) * fontSlack
+	if sty.Font.Weight >= xfont.WeightBold {
+		w = sty.Width(txt) * boldFontSlack
+	}
+	widths.Store(k, w)
+	return w
+}
+
+// widths keeps the widths textWidth has measured: the layouts measure the
+// same words again and again while they try sizes and places, and a
+// font's Width walks every glyph. Shared by the figures drawn at once.
+var widths sync.Map
+
+// widthKey is a text in a font.
+type widthKey struct {
+	typeface font.Typeface
+	variant  font.Variant
+	style    xfont.Style
+	weight   xfont.Weight
+	size     vg.Length
+	text     string
 }
 
 // textBox returns the size of the box the layout keeps for txt in sty: its

@@ -27,8 +27,14 @@ type Smoothing struct {
 	K        float64 // the weighting's concentration
 	Expected float64 // E, the sum of a uniform scatter
 	Sigma    float64 // √Var, its standard deviation
-	cut      float64 // |a·n| below which w < 1e-12: left out of the sum
+	cut      float64 // |a·n| below which w < smoothCut: left out of the sum
 }
+
+// smoothCut is the weight below which a reading is left out of a sum: each
+// one left out changes the sum by less than smoothCut, so the density by
+// less than N·smoothCut/σ (about 1e-4σ for a hundred readings, well below
+// any contour interval).
+const smoothCut = 1e-6
 
 // NewSmoothing returns the weighting for n readings (n ≥ 1).
 func NewSmoothing(n float64) Smoothing {
@@ -36,7 +42,7 @@ func NewSmoothing(n float64) Smoothing {
 	k := 2 * (1 + n/(sigma*sigma))
 	e1 := -math.Expm1(-k) / k         // (1 − e^(−K))/K
 	e2 := -math.Expm1(-2*k) / (2 * k) // (1 − e^(−2K))/(2K)
-	return Smoothing{N: n, K: k, Expected: n * e1, Sigma: math.Sqrt(n * (e2 - e1*e1)), cut: math.Max(0, 1+math.Log(1e-12)/k)}
+	return Smoothing{N: n, K: k, Expected: n * e1, Sigma: math.Sqrt(n * (e2 - e1*e1)), cut: math.Max(0, 1+math.Log(smoothCut)/k)}
 }
 
 // Weight returns w for |a·n| = c.
@@ -60,7 +66,7 @@ func (s Smoothing) Density(axis r3.Vec, normals []r3.Vec, weights []float64) flo
 
 // SmoothCounter is Smoothing.Density for many axes over the same readings:
 // the readings are sorted into cells as by KambCounter, and each sum visits
-// only the readings whose weight is at least 1e-12 (the others would change
+// only the readings whose weight is at least smoothCut (the others would change
 // the sum by less than that per reading). Read-only: it may be shared.
 type SmoothCounter struct {
 	s     Smoothing

@@ -58,7 +58,7 @@ func TestSmoothCounterIsTheSum(t *testing.T) {
 	// The cell search leaves out only weights below 1e-12: its sums match
 	// the plain sum over every reading (a different route to the same
 	// number), weighted and not, for small and large sets.
-	const sumTol = 1e-9 // relative, or this times n/σ absolute
+	const sumTol = smoothCut // each reading left out weighs less: this times n/σ absolute, or relative
 	rng := rand.New(rand.NewPCG(43, 44))
 	for _, n := range []int{20, 500, 20000} {
 		ns := make([]r3.Vec, n)
